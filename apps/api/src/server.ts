@@ -1,0 +1,29 @@
+import { createDatabase } from '@keybed/db/client';
+import { createApp } from './app';
+import { loadConfig } from './config/env';
+import { createLogger } from './lib/logger';
+import { createSmtpMailer } from './lib/mail';
+
+const config = loadConfig();
+const logger = createLogger(config.logLevel);
+const { db, sql } = createDatabase(config.databaseUrl, { max: config.databasePoolMax });
+const mailer = createSmtpMailer(config.smtp);
+const app = createApp({ config, db, sql, mailer, logger });
+
+const server = app.listen(config.port, config.host, () => {
+  logger.info({ port: config.port, host: config.host }, 'Keybed API listening');
+});
+
+let isStopping = false;
+async function stop(signal: string) {
+  if (isStopping) return;
+  isStopping = true;
+  logger.info({ signal }, 'stopping');
+  server.close();
+  server.closeAllConnections();
+  mailer.close();
+  await sql.end({ timeout: 5 });
+  process.exit(0);
+}
+process.on('SIGINT', () => void stop('SIGINT'));
+process.on('SIGTERM', () => void stop('SIGTERM'));

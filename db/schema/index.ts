@@ -1,0 +1,2 @@
+export * from './workshops';
+export * from './users';

@@ -1,0 +1,4 @@
+export * from './errors';
+export * from './schemas/common';
+export * from './schemas/auth';
+export * from './schemas/team';
