@@ -1,0 +1,2 @@
+export const DEMO_PASSWORD: string;
+export const DEMO_MEMBERS: ReadonlyArray<{ email: string; role: string }>;

@@ -1,0 +1,60 @@
+// The pieces `npm start`, `npm run dev` and `npm test` share: database, demo data, mail, server.
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { run, say, startDetached, waitFor } from './proc.mjs';
+
+export const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+
+const tsx = path.join(ROOT, 'node_modules', '.bin', 'tsx');
+
+/** Applies migrations and (unless told not to) the idempotent demo seed. */
+export async function prepareDatabase(databaseUrl, { seed = true } = {}) {
+  const env = { ...process.env, DATABASE_URL: databaseUrl };
+  await run(tsx, ['db/migrate.ts'], { cwd: ROOT, env });
+  if (seed) await run(tsx, ['db/seed/run.ts'], { cwd: ROOT, env });
+}
+
+export async function buildAll() {
+  say('Building the web app and the API…');
+  await run('npm', ['run', '--silent', 'build'], { cwd: ROOT });
+}
+
+/** Starts the built API (serving the built web app too) and waits until /api/health answers. */
+export async function startServer({ port, env }) {
+  const server = startDetached(process.execPath, ['--enable-source-maps', 'apps/api/dist/server.js'], {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      APP_ORIGIN: `http://localhost:${port}`,
+      WEB_DIST: path.join(ROOT, 'dist', 'web'),
+      ...env,
+    },
+  });
+  let exited = false;
+  server.child.once('exit', () => (exited = true));
+  await waitFor(
+    async () => {
+      if (exited) throw new Error('The server stopped while starting; see its log above.');
+      return (await fetch(`http://127.0.0.1:${port}/api/health`)).ok;
+    },
+    { what: 'the Keybed server' },
+  );
+  return server;
+}
+
+/** Runs `cleanup` once on Ctrl-C / SIGTERM, then exits. */
+export function onShutdown(cleanup) {
+  let isStopping = false;
+  const handler = async (signal) => {
+    if (isStopping) return;
+    isStopping = true;
+    say(`${signal}: stopping…`);
+    await cleanup().catch((err) => console.error(err));
+    process.exit(0);
+  };
+  process.on('SIGINT', handler);
+  process.on('SIGTERM', handler);
+}
