@@ -1,2 +1,4 @@
 export * from './workshops';
 export * from './users';
+export * from './clients';
+export * from './board';

@@ -1,6 +1,7 @@
 import { eq, inArray } from 'drizzle-orm';
 import type { Database } from '../client';
-import { memberships, users, workshops } from '../schema/index';
+import { DEFAULT_STAGE_NAMES } from '@keybed/shared';
+import { memberships, stages, users, workshops } from '../schema/index';
 import { DEMO_MEMBERS, DEMO_PASSWORD, DEMO_WORKSHOP } from './demo';
 
 export { DEMO_MEMBERS, DEMO_PASSWORD, DEMO_WORKSHOP };
@@ -8,7 +9,10 @@ export { DEMO_MEMBERS, DEMO_PASSWORD, DEMO_WORKSHOP };
 /** Inserts what is missing of the demo scenario; rows already there are left as they are. */
 export async function seedDemo(db: Database, hashPassword: (password: string) => Promise<string>) {
   await db.transaction(async (tx) => {
-    await tx.insert(workshops).values(DEMO_WORKSHOP).onConflictDoNothing();
+    const created = await tx.insert(workshops).values(DEMO_WORKSHOP).onConflictDoNothing().returning({ id: workshops.id });
+    if (created.length > 0) {
+      await tx.insert(stages).values(DEFAULT_STAGE_NAMES.map((name, position) => ({ workshopId: DEMO_WORKSHOP.id, name, position })));
+    }
     const existing = await tx
       .select({ email: users.email })
       .from(users)

@@ -3,3 +3,7 @@ export * from './schemas/common';
 export * from './schemas/auth';
 export * from './schemas/team';
 export * from './domain/index';
+export * from './schemas/clients';
+export * from './schemas/pianos';
+export * from './schemas/stages';
+export * from './schemas/jobs';

@@ -4,7 +4,7 @@
  */
 
 /** Piano types with their own regulation defaults. */
-export type PianoType = 'grand' | 'upright';
+export type RegulatedPianoType = 'grand' | 'upright';
 
 /** Regulation settings measured in millimetres. */
 export type RegulationSetting =
@@ -20,7 +20,7 @@ export type RegulationSetting =
 /** One default: nominal value and accepted range, millimetres; `source` names the figures' origin. */
 export interface RegulationSpec {
   setting: RegulationSetting | 'damperLift';
-  pianoType: PianoType;
+  pianoType: RegulatedPianoType;
   label: string;
   nominalMm: number;
   minMm: number;
@@ -57,18 +57,18 @@ const UPRIGHT: Row[] = [
   ['sharpHeight', 'Sharp height above naturals', 12.35, 12, 12.7, 'S10g'],
 ];
 
-function toSpec(pianoType: PianoType, [setting, label, nominalMm, minMm, maxMm, source]: Row): RegulationSpec {
+function toSpec(pianoType: RegulatedPianoType, [setting, label, nominalMm, minMm, maxMm, source]: Row): RegulationSpec {
   return { setting, pianoType, label, nominalMm, minMm, maxMm, source };
 }
 
 /** Default specs by piano type. Where a source gives only a range, the nominal is its midpoint. */
-export const REGULATION_SPECS: Readonly<Record<PianoType, readonly RegulationSpec[]>> = {
+export const REGULATION_SPECS: Readonly<Record<RegulatedPianoType, readonly RegulationSpec[]>> = {
   grand: GRAND.map((row) => toSpec('grand', row)),
   upright: UPRIGHT.map((row) => toSpec('upright', row)),
 };
 
 /** The default spec for one setting, or undefined when the piano type has no such setting (drop on an upright). */
-export function findRegulationSpec(pianoType: PianoType, setting: RegulationSetting): RegulationSpec | undefined {
+export function findRegulationSpec(pianoType: RegulatedPianoType, setting: RegulationSetting): RegulationSpec | undefined {
   return REGULATION_SPECS[pianoType].find((spec) => spec.setting === setting);
 }
 
@@ -76,7 +76,7 @@ export function findRegulationSpec(pianoType: PianoType, setting: RegulationSett
  * Damper lift as hammer travel in mm from rest at which the damper starts to lift: about half the
  * blow distance (S10h), accepted from 40 % to 60 % of it (range: common practice).
  */
-export function damperLiftSpec(pianoType: PianoType, blowDistanceMm: number): RegulationSpec {
+export function damperLiftSpec(pianoType: RegulatedPianoType, blowDistanceMm: number): RegulationSpec {
   const at = (fraction: number) => Math.round(blowDistanceMm * fraction * 100) / 100;
   return {
     setting: 'damperLift',

@@ -1,7 +1,7 @@
 import { and, desc, eq, gt, isNull } from 'drizzle-orm';
 import type { Database } from '@keybed/db/client';
-import { memberships, passwordResets, users, workshops } from '@keybed/db/schema';
-import type { Role } from '@keybed/shared';
+import { memberships, passwordResets, stages, users, workshops } from '@keybed/db/schema';
+import { DEFAULT_STAGE_NAMES, type Role } from '@keybed/shared';
 
 export type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
 type Db = Database | Tx;
@@ -20,6 +20,7 @@ export function createAuthRepo(db: Database) {
         .values({ email: input.email, name: input.name, passwordHash: input.passwordHash })
         .returning({ id: users.id });
       await tx.insert(memberships).values({ workshopId: workshop!.id, userId: user!.id, role: 'owner' });
+      await tx.insert(stages).values(DEFAULT_STAGE_NAMES.map((name, position) => ({ workshopId: workshop!.id, name, position })));
       return { workshopId: workshop!.id, userId: user!.id };
     },
 
