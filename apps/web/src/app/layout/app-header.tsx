@@ -1,0 +1,38 @@
+import type { Me } from '@keybed/shared';
+import { Link } from 'react-router-dom';
+import { LogoMark } from '@/components/logo';
+import { paths } from '@/config/paths';
+import { ROLE_LABELS } from '@/lib/roles';
+import { MainNav } from './main-nav';
+import { SignOutButton } from './sign-out-button';
+
+export function AppHeader({ me }: { me: Me }) {
+  return (
+    <header className="bg-ink text-paper">
+      <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-1 px-4 pt-2 sm:px-6 lg:px-8 lg:py-1">
+        <div className="order-1 flex min-w-0 flex-1 items-center gap-3 py-1 lg:flex-none">
+          <LogoMark className="text-graphite-700" />
+          <div className="min-w-0">
+            <Link to={paths.home.build()} className="block text-lg leading-tight font-bold hover:underline">
+              {me.workshop.name}
+            </Link>
+            <p className="truncate text-xs text-graphite-300">
+              <span className="sm:hidden">
+                {me.user.name} · {ROLE_LABELS[me.role]}
+              </span>
+              <span className="hidden sm:inline">Keybed</span>
+            </p>
+          </div>
+        </div>
+        <MainNav role={me.role} className="order-3 w-full lg:order-2 lg:w-auto lg:flex-1" />
+        <div className="order-2 flex items-center gap-3 lg:order-3">
+          <p className="hidden text-right text-sm leading-tight sm:block">
+            <span className="block font-semibold">{me.user.name}</span>
+            <span className="block text-graphite-300">{ROLE_LABELS[me.role]}</span>
+          </p>
+          <SignOutButton />
+        </div>
+      </div>
+    </header>
+  );
+}

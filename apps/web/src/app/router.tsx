@@ -1,0 +1,59 @@
+import type { ComponentType } from 'react';
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, type LoaderFunction, type RouteObject } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { PageSkeleton } from './layout/page-skeleton';
+import { RootLayout } from './layout/root-layout';
+import { PageRouteError, RootRouteError } from './routes/route-error';
+
+/** What a lazy route module may export. Loaders only warm the query cache; pages read via useQuery. */
+interface RouteModule {
+  Component: ComponentType;
+  ErrorBoundary?: ComponentType;
+  clientLoader?: (queryClient: QueryClient) => LoaderFunction;
+}
+
+export function createRouter(queryClient: QueryClient) {
+  const lazy = (load: () => Promise<RouteModule>) => async () => {
+    const { clientLoader, ...rest } = await load();
+    return clientLoader ? { ...rest, loader: clientLoader(queryClient) } : rest;
+  };
+
+  const routes: RouteObject[] = [
+    {
+      Component: RootLayout,
+      ErrorBoundary: RootRouteError,
+      HydrateFallback: PageSkeleton,
+      children: [
+        {
+          lazy: lazy(() => import('./routes/auth-layout')),
+          children: [
+            { path: paths.signIn.path, lazy: lazy(() => import('./routes/sign-in')) },
+            { path: paths.signUp.path, lazy: lazy(() => import('./routes/sign-up')) },
+            { path: paths.resetPassword.path, lazy: lazy(() => import('./routes/reset-password')) },
+            { path: paths.resetPasswordConfirm.path, lazy: lazy(() => import('./routes/reset-password-confirm')) },
+            { path: paths.invitation.path, lazy: lazy(() => import('./routes/accept-invitation')) },
+          ],
+        },
+        {
+          lazy: lazy(() => import('./routes/app-layout')),
+          children: [
+            {
+              // Errors in a page render inside the signed-in layout, keeping the navigation.
+              ErrorBoundary: PageRouteError,
+              children: [
+                { index: true, lazy: lazy(() => import('./routes/home')) },
+                { path: paths.team.path, lazy: lazy(() => import('./routes/team')) },
+              ],
+            },
+          ],
+        },
+        { path: '*', lazy: lazy(() => import('./routes/not-found')) },
+      ],
+    },
+  ];
+
+  return createBrowserRouter(routes);
+}
+
+export type AppRouter = ReturnType<typeof createRouter>;

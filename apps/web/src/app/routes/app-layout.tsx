@@ -1,0 +1,44 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { Navigate, Outlet, useLocation } from 'react-router-dom';
+import { ErrorState } from '@/components/error-state';
+import { paths } from '@/config/paths';
+import { meQueryOptions, useMe } from '@/features/auth/api/get-me';
+import { isApiError } from '@/lib/api-client';
+import { AppHeader } from '../layout/app-header';
+import { PageSkeleton } from '../layout/page-skeleton';
+import { SkipLink } from '../layout/skip-link';
+
+export const clientLoader = (queryClient: QueryClient) => () => {
+  void queryClient.prefetchQuery(meQueryOptions());
+  return null;
+};
+
+/** Everything behind sign-in. Pages render only once the member is known. */
+export function Component() {
+  const me = useMe();
+  const location = useLocation();
+
+  if (me.data) {
+    return (
+      <div className="flex min-h-dvh flex-col">
+        <SkipLink />
+        <AppHeader me={me.data} />
+        <main id="main" tabIndex={-1} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 sm:px-6 lg:px-8 lg:py-8">
+          <Outlet />
+        </main>
+      </div>
+    );
+  }
+  if (isApiError(me.error) && me.error.code === 'unauthenticated') {
+    return <Navigate to={paths.signIn.build({ next: `${location.pathname}${location.search}` })} replace />;
+  }
+  if (me.isError) {
+    return (
+      <main id="main" className="mx-auto max-w-xl px-4 py-16">
+        <h1 className="sr-only">Keybed could not start</h1>
+        <ErrorState error={me.error} onRetry={() => void me.refetch()} isRetrying={me.isFetching} />
+      </main>
+    );
+  }
+  return <PageSkeleton />;
+}

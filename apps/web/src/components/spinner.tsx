@@ -1,0 +1,11 @@
+import { cx } from '@/lib/cx';
+
+/** Small inline busy mark for buttons and rows; pages use skeletons instead. */
+export function Spinner({ className }: { className?: string }) {
+  return (
+    <span
+      aria-hidden="true"
+      className={cx('inline-block size-4 shrink-0 animate-spin rounded-full border-2 border-current border-r-transparent', className)}
+    />
+  );
+}

@@ -1,0 +1,45 @@
+/** Every route path and link builder, declared once. Routes use `.path`; links use `.build()`. */
+
+export type SignInNotice = 'password-set' | 'signed-out' | 'invitation-used';
+
+export const paths = {
+  home: { path: '/', build: () => '/' },
+  signIn: {
+    path: '/sign-in',
+    build: (options: { next?: string; notice?: SignInNotice } = {}) => {
+      const query = new URLSearchParams();
+      if (options.next && options.next !== '/') query.set('next', options.next);
+      if (options.notice) query.set('notice', options.notice);
+      const search = query.toString();
+      return search ? `/sign-in?${search}` : '/sign-in';
+    },
+  },
+  signUp: { path: '/sign-up', build: () => '/sign-up' },
+  resetPassword: { path: '/reset-password', build: () => '/reset-password' },
+  resetPasswordConfirm: {
+    path: '/reset-password/:token',
+    build: (token: string) => `/reset-password/${encodeURIComponent(token)}`,
+  },
+  invitation: {
+    path: '/invitations/:token',
+    build: (token: string) => `/invitations/${encodeURIComponent(token)}`,
+  },
+  team: { path: '/team', build: () => '/team' },
+} as const;
+
+const PUBLIC_PREFIXES = ['/sign-in', '/sign-up', '/reset-password', '/invitations/'];
+
+/** Pages anyone may open without a session; a 401 there must not bounce to sign-in again. */
+export function isPublicPath(pathname: string): boolean {
+  return PUBLIC_PREFIXES.some((prefix) => pathname === prefix || pathname.startsWith(prefix));
+}
+
+/**
+ * The `next` return path after sign-in, accepted only when it stays inside this app
+ * (starts with one slash, not `//` or `/\`), so a crafted link cannot send people elsewhere.
+ */
+export function safeNextPath(value: string | null | undefined): string {
+  if (!value || !value.startsWith('/') || value.startsWith('//') || value.startsWith('/\\')) return '/';
+  if (isPublicPath(value)) return '/';
+  return value;
+}

@@ -1,0 +1,60 @@
+import type { FormEvent } from 'react';
+import { SignUpInput } from '@keybed/shared';
+import { Button } from '@/components/button';
+import { Field } from '@/components/field';
+import { FormError } from '@/components/form-error';
+import { TextInput } from '@/components/text-input';
+import { isApiError } from '@/lib/api-client';
+import { readForm, validateForm } from '@/lib/form';
+import { useFormErrors } from '@/lib/use-form-errors';
+import { useSignUp } from '../api/sign-up';
+
+export function SignUpForm({ onCreated }: { onCreated: () => void }) {
+  const signUp = useSignUp();
+  const form = useFormErrors();
+
+  function handleError(error: Error) {
+    if (isApiError(error) && error.code === 'email_taken') {
+      return form.showFields({ email: ['An account already uses this e-mail. Sign in instead, or use another e-mail.'] });
+    }
+    form.showApiFields(error);
+  }
+
+  function handleSubmit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const result = validateForm(SignUpInput, readForm(event.currentTarget));
+    if (result.fields) {
+      signUp.reset();
+      return form.showFields(result.fields);
+    }
+    form.reset();
+    signUp.mutate(result.data, { onSuccess: onCreated, onError: handleError });
+  }
+
+  return (
+    <form
+      ref={form.formRef}
+      noValidate
+      onSubmit={handleSubmit}
+      onInput={(event) => form.clearField((event.target as HTMLInputElement).name)}
+      className="space-y-4"
+    >
+      <FormError error={signUp.error} except={['email_taken']} />
+      <Field label="Workshop name" hint="As your clients know it." error={form.errorFor('workshopName')}>
+        {(control) => <TextInput {...control} name="workshopName" autoComplete="organization" required />}
+      </Field>
+      <Field label="Your name" error={form.errorFor('name')}>
+        {(control) => <TextInput {...control} name="name" autoComplete="name" required />}
+      </Field>
+      <Field label="E-mail" error={form.errorFor('email')}>
+        {(control) => <TextInput {...control} name="email" type="email" autoComplete="email" required />}
+      </Field>
+      <Field label="Password" hint="At least 8 characters." error={form.errorFor('password')}>
+        {(control) => <TextInput {...control} name="password" type="password" autoComplete="new-password" required />}
+      </Field>
+      <Button type="submit" isPending={signUp.isPending} className="w-full">
+        Create workshop
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,14 @@
+import type { Role } from '@keybed/shared';
+
+export const ROLE_LABELS: Record<Role, string> = {
+  owner: 'Owner',
+  foreman: 'Foreman',
+  technician: 'Technician',
+};
+
+export const ROLE_OPTIONS = (Object.keys(ROLE_LABELS) as Role[]).map((role) => ({ value: role, label: ROLE_LABELS[role] }));
+
+/** Only owners manage members and invitations; the API enforces the same rule. */
+export function canManageTeam(role: Role): boolean {
+  return role === 'owner';
+}
