@@ -22,7 +22,8 @@ export default defineConfig({
     emptyOutDir: true,
     // The app runs under a strict CSP (img-src/font-src 'self'), so nothing is inlined as data: URIs.
     assetsInlineLimit: 0,
-    sourcemap: true,
+    // Maps are written for error reports but not referenced by the served bundles.
+    sourcemap: 'hidden',
     rolldownOptions: {
       output: { codeSplitting: { groups: vendorGroups } },
     },

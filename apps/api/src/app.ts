@@ -9,13 +9,31 @@ import type { Config } from './config/env';
 import { apiNotFound, errorHandler } from './http/errors';
 import { sameOriginOnly, securityHeaders } from './http/security';
 import { sessionMiddleware } from './http/session';
+import { createLiveEvents } from './lib/live-events';
 import { scrubUrl, type Logger } from './lib/logger';
 import type { Mailer } from './lib/mail';
 import { createSessionStore } from './lib/sessions';
 import { createAuthRepo } from './modules/auth/auth.repo';
 import { authRouter } from './modules/auth/auth.router';
 import { createAuthService } from './modules/auth/auth.service';
+import { createBoardRepo } from './modules/board/board.repo';
+import { boardRouter } from './modules/board/board.router';
+import { createBoardService } from './modules/board/board.service';
+import { createClientsRepo } from './modules/clients/clients.repo';
+import { clientsRouter } from './modules/clients/clients.router';
+import { createClientsService } from './modules/clients/clients.service';
+import { eventsRouter } from './modules/events/events.router';
 import { healthRouter } from './modules/health/health.router';
+import { createJobsRepo } from './modules/jobs/jobs.repo';
+import { jobsRouter } from './modules/jobs/jobs.router';
+import { createJobsService } from './modules/jobs/jobs.service';
+import { technicianLookup } from './modules/jobs/technicians';
+import { createPianosRepo } from './modules/pianos/pianos.repo';
+import { pianosRouter } from './modules/pianos/pianos.router';
+import { createPianosService } from './modules/pianos/pianos.service';
+import { createStagesRepo } from './modules/stages/stages.repo';
+import { stagesRouter } from './modules/stages/stages.router';
+import { createStagesService } from './modules/stages/stages.service';
 import { createTeamRepo } from './modules/team/team.repo';
 import { teamRouter } from './modules/team/team.router';
 import { createTeamService } from './modules/team/team.service';
@@ -29,9 +47,14 @@ export interface AppDeps {
   now?: () => Date;
 }
 
-/** Builds the Express app; `server.ts` listens. Tests build it on port 0 against a real database. */
+/**
+ * Builds the Express app; `server.ts` listens. Tests build it on port 0 against a real database.
+ * The app holds this process's LISTEN connection for live events: `close()` ends the open event
+ * streams and stops listening (call it before closing the server and the pool).
+ */
 export function createApp({ config, db, sql, mailer, logger, now = () => new Date() }: AppDeps) {
-  const app = express();
+  const live = createLiveEvents({ sql, logger });
+  const app = Object.assign(express(), { close: () => live.close() });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
 
@@ -39,6 +62,11 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   const authRepo = createAuthRepo(db);
   const auth = createAuthService({ repo: authRepo, sessions, mailer, appOrigin: config.appOrigin, now });
   const team = createTeamService({ repo: createTeamRepo(db), sessions, mailer, appOrigin: config.appOrigin, now });
+  const pianos = createPianosService({ repo: createPianosRepo(db), now });
+  const clients = createClientsService({ repo: createClientsRepo(db), pianos, now });
+  const stages = createStagesService({ repo: createStagesRepo(db), now });
+  const jobs = createJobsService({ repo: createJobsRepo(db), technicians: technicianLookup, now });
+  const board = createBoardService({ repo: createBoardRepo(db, technicianLookup), technicians: technicianLookup });
 
   app.use(
     pinoHttp({
@@ -64,6 +92,12 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   api.use(sessionMiddleware(sessions, authRepo.findMembership));
   api.use(authRouter(auth, sessions, config.limits));
   api.use(teamRouter(team, auth, sessions));
+  api.use(clientsRouter(clients));
+  api.use(pianosRouter(pianos));
+  api.use(stagesRouter(stages));
+  api.use(jobsRouter(jobs));
+  api.use(boardRouter(board));
+  api.use(eventsRouter(live));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -19,6 +19,7 @@ async function stop(signal: string) {
   if (isStopping) return;
   isStopping = true;
   logger.info({ signal }, 'stopping');
+  await app.close();
   server.close();
   server.closeAllConnections();
   mailer.close();

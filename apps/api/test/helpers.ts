@@ -16,14 +16,14 @@ function dbUrl(base: string, name: string) {
 }
 
 /** A database of this test file's own, cloned from the migrated template. */
-export async function createTestDatabase() {
+export async function createTestDatabase(options: { onQuery?: (query: string) => void } = {}) {
   const base = inject('pgBaseUrl');
   const name = `keybed_t_${crypto.randomBytes(6).toString('hex')}`;
   const admin = postgres(base, { max: 1, onnotice: () => {} });
   await admin.unsafe(`CREATE DATABASE ${name} TEMPLATE ${TEMPLATE_DB}`);
   await admin.end();
   const url = dbUrl(base, name);
-  const { db, sql } = createDatabase(url, { max: 5 });
+  const { db, sql } = createDatabase(url, { max: 5, onQuery: options.onQuery });
   return {
     url,
     db,
@@ -40,11 +40,13 @@ export async function createTestDatabase() {
 export interface TestAppOptions {
   limits?: Partial<Config['limits']>;
   now?: () => Date;
+  /** Sees every SQL statement the app sends. */
+  onQuery?: (query: string) => void;
 }
 
 /** The real app on a real database and the real SMTP client pointed at the fake mail server. */
 export async function createTestApp(options: TestAppOptions = {}) {
-  const database = await createTestDatabase();
+  const database = await createTestDatabase({ onQuery: options.onQuery });
   const base = loadConfig({
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
@@ -62,6 +64,7 @@ export async function createTestApp(options: TestAppOptions = {}) {
     agent: () => supertest.agent(app),
     request: () => supertest(app),
     async close() {
+      await app.close();
       mailer.close();
       await database.drop();
     },

@@ -12,6 +12,7 @@ export const ERROR_CODES = [
   'version_conflict',
   'email_taken',
   'last_owner',
+  'stage_not_empty',
   'token_invalid',
   'rate_limited',
   'payload_too_large',

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { Email } from './common';
+import { Piano } from './pianos';
 
 const optionalText = (max: number, label: string) =>
   z
@@ -19,7 +20,10 @@ export const CreateClientInput = z.object({
 });
 export type CreateClientInput = z.infer<typeof CreateClientInput>;
 
-export const UpdateClientInput = CreateClientInput.partial();
+export const UpdateClientInput = CreateClientInput.partial().refine((v) => Object.values(v).some((x) => x !== undefined), {
+  error: 'Nothing to change',
+  path: ['name'],
+});
 export type UpdateClientInput = z.infer<typeof UpdateClientInput>;
 
 export const ClientListQuery = z.object({
@@ -39,3 +43,9 @@ export const Client = z.object({
   updatedAt: z.string(),
 });
 export type Client = z.infer<typeof Client>;
+
+export const ClientList = z.object({ clients: z.array(Client) });
+export type ClientList = z.infer<typeof ClientList>;
+
+export const ClientDetail = Client.extend({ pianos: z.array(Piano) });
+export type ClientDetail = z.infer<typeof ClientDetail>;

@@ -1,10 +1,9 @@
 import { z } from 'zod';
 import { Id } from './common';
+import { JobStatus } from './job-status';
 import { KeytopMaterial, PianoType } from './pianos';
 
-export const JOB_STATUSES = ['active', 'on_hold', 'done', 'cancelled'] as const;
-export const JobStatus = z.enum(JOB_STATUSES, { error: 'Choose active, on hold, done or cancelled' });
-export type JobStatus = z.infer<typeof JobStatus>;
+export { JOB_STATUSES, JobStatus, ON_BOARD_STATUSES, isOnBoard } from './job-status';
 
 export const JOB_PRIORITIES = ['low', 'normal', 'high', 'urgent'] as const;
 export const JobPriority = z.enum(JOB_PRIORITIES, { error: 'Choose low, normal, high or urgent' });
@@ -16,21 +15,20 @@ export const DateOnly = z.iso.date({ error: 'Use a date like 2026-12-24' });
 const Title = z.string({ error: 'Title is required' }).trim().min(1, { error: 'Title is required' }).max(200, { error: 'Title is too long' });
 const BlockedReason = z.string().trim().max(300, { error: 'Reason is too long' });
 
-export const CreateJobInput = z
-  .object({
+export const CreateJobInput = z.object({
     pianoId: Id,
     title: Title,
     stageId: Id.optional(),
     priority: JobPriority.optional(),
     promisedOn: DateOnly.nullable().optional(),
     notes: z.string().max(10000).optional(),
-  });
+});
 export type CreateJobInput = z.infer<typeof CreateJobInput>;
 
 /** Edits carry the version they were based on; a stale one gets 409 with the job as it is now. */
 export const UpdateJobInput = z
   .object({
-    version: z.number().int().min(1),
+    version: z.number({ error: 'Version must be a number' }).int().min(1),
     title: Title.optional(),
     status: JobStatus.optional(),
     priority: JobPriority.optional(),
@@ -39,14 +37,18 @@ export const UpdateJobInput = z
     blockedReason: BlockedReason.nullable().optional(),
     notes: z.string().max(10000).optional(),
   })
-  .refine((v) => !(v.isBlocked === true && !v.blockedReason), { error: 'Say why the job is blocked', path: ['blockedReason'] });
+  .refine((v) => !(v.isBlocked === true && !v.blockedReason), { error: 'Say why the job is blocked', path: ['blockedReason'] })
+  .refine(({ version: _version, ...changes }) => Object.values(changes).some((x) => x !== undefined), {
+    error: 'Nothing to change',
+    path: ['title'],
+  });
 export type UpdateJobInput = z.infer<typeof UpdateJobInput>;
 
 /** Move to `stageId` at 0-based `index` among that stage's jobs. */
 export const MoveJobInput = z.object({
   stageId: Id,
   index: z.number({ error: 'Index must be a number' }).int({ error: 'Index must be a whole number' }).min(0, { error: 'Index cannot be negative' }),
-  version: z.number().int().min(1),
+  version: z.number({ error: 'Version must be a number' }).int().min(1),
 });
 export type MoveJobInput = z.infer<typeof MoveJobInput>;
 
@@ -91,6 +93,13 @@ export const Job = z.object({
 });
 export type Job = z.infer<typeof Job>;
 
+export const JobList = z.object({ jobs: z.array(Job) });
+export type JobList = z.infer<typeof JobList>;
+
+/** What a successful move answers: the job with its new stage, position and version. */
+export const MoveJobResult = z.object({ job: Job });
+export type MoveJobResult = z.infer<typeof MoveJobResult>;
+
 export const JobStageEvent = z.object({
   id: z.string(),
   fromStage: z.object({ id: z.string(), name: z.string() }).nullable(),
@@ -128,6 +137,16 @@ export const Board = z.object({ stages: z.array(BoardStage) });
 export type Board = z.infer<typeof Board>;
 
 /** What the live event stream carries: ids and kinds, never another workshop's data. */
-export const LIVE_EVENT_KINDS = ['job.created', 'job.updated', 'job.moved', 'stage.changed', 'client.changed', 'piano.changed'] as const;
+export const LIVE_EVENT_KINDS = [
+  'job.created',
+  'job.updated',
+  'job.moved',
+  'stage.changed',
+  /** The order of the active stages changed; `id` is the workshop's id. */
+  'stages.reordered',
+  'client.changed',
+  'piano.changed',
+] as const;
+export type LiveEventKind = (typeof LIVE_EVENT_KINDS)[number];
 export const LiveEvent = z.object({ kind: z.enum(LIVE_EVENT_KINDS), id: z.string(), at: z.string() });
 export type LiveEvent = z.infer<typeof LiveEvent>;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { Id } from './common';
+import { JobStatus } from './job-status';
 
 export const PIANO_TYPES = ['grand', 'upright', 'square', 'other'] as const;
 export const PianoType = z.enum(PIANO_TYPES, { error: 'Choose grand, upright, square or other' });
@@ -30,7 +31,10 @@ export const CreatePianoInput = z.object({
 });
 export type CreatePianoInput = z.infer<typeof CreatePianoInput>;
 
-export const UpdatePianoInput = CreatePianoInput.partial();
+export const UpdatePianoInput = CreatePianoInput.partial().refine((v) => Object.values(v).some((x) => x !== undefined), {
+  error: 'Nothing to change',
+  path: ['maker'],
+});
 export type UpdatePianoInput = z.infer<typeof UpdatePianoInput>;
 
 export const PianoListQuery = z.object({
@@ -57,3 +61,20 @@ export const Piano = z.object({
   updatedAt: z.string(),
 });
 export type Piano = z.infer<typeof Piano>;
+
+export const PianoList = z.object({ pianos: z.array(Piano) });
+export type PianoList = z.infer<typeof PianoList>;
+
+/** One line of a piano's job history, newest first. */
+export const PianoJob = z.object({
+  id: z.string(),
+  title: z.string(),
+  status: JobStatus,
+  stageName: z.string(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type PianoJob = z.infer<typeof PianoJob>;
+
+export const PianoDetail = Piano.extend({ jobs: z.array(PianoJob) });
+export type PianoDetail = z.infer<typeof PianoDetail>;

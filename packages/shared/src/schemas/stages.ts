@@ -29,4 +29,7 @@ export const Stage = z.object({
 });
 export type Stage = z.infer<typeof Stage>;
 
+export const StageList = z.object({ stages: z.array(Stage) });
+export type StageList = z.infer<typeof StageList>;
+
 export const DEFAULT_STAGE_NAMES = ['Intake', 'Strip-down', 'Hammers', 'Regulation', 'Finish', 'Delivery'] as const;
