@@ -50,11 +50,12 @@ export interface AppDeps {
 /**
  * Builds the Express app; `server.ts` listens. Tests build it on port 0 against a real database.
  * The app holds this process's LISTEN connection for live events: `close()` ends the open event
- * streams and stops listening (call it before closing the server and the pool).
+ * streams and stops listening (call it before closing the server and the pool); `liveStreamCount()`
+ * says how many event streams this process is serving.
  */
 export function createApp({ config, db, sql, mailer, logger, now = () => new Date() }: AppDeps) {
   const live = createLiveEvents({ sql, logger });
-  const app = Object.assign(express(), { close: () => live.close() });
+  const app = Object.assign(express(), { close: () => live.close(), liveStreamCount: () => live.subscriberCount() });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
 

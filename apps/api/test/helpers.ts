@@ -59,6 +59,8 @@ export async function createTestApp(options: TestAppOptions = {}) {
   const app = createApp({ config, db: database.db, sql: database.sql, mailer, logger: createLogger('silent'), now: options.now });
   return {
     app,
+    config,
+    databaseUrl: database.url,
     db: database.db,
     sql: database.sql,
     agent: () => supertest.agent(app),

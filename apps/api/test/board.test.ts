@@ -1,0 +1,123 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Board } from '@keybed/shared';
+import type supertest from 'supertest';
+import { activeStages, createClient, createJob, createPiano, fillStage } from './board-fixtures';
+import { addMember, createTestApp, signUpWorkshop, type TestApp } from './helpers';
+import { ErrorBody } from './schemas';
+
+let t: TestApp;
+let statements: string[] = [];
+beforeAll(async () => {
+  t = await createTestApp({ onQuery: (query) => statements.push(query) });
+});
+afterAll(() => t.close());
+
+const boardOf = async (agent: supertest.Agent, query = '') => Board.parse((await agent.get(`/api/board${query}`).expect(200)).body);
+const jobIdsByStage = (board: Board) => Object.fromEntries(board.stages.map((s) => [s.name, s.jobs.map((j) => j.id)]));
+
+describe('GET /api/board', () => {
+  it('when jobs sit in several stages, then active stages come in order with their jobs by position and their counts', async () => {
+    const { agent } = await signUpWorkshop(t);
+    const [intake, stripDown, hammers] = await activeStages(agent);
+    const [a, b, c] = await fillStage(agent, intake!.id, 3, 'Intake');
+    const [x] = await fillStage(agent, hammers!.id, 1, 'Hammers');
+    await agent.post(`/api/jobs/${c!.id}/move`).send({ stageId: intake!.id, index: 0, version: 1 }).expect(200);
+    await agent.patch(`/api/stages/${stripDown!.id}`).send({ wipLimit: 2 }).expect(200);
+
+    const board = await boardOf(agent);
+    expect(board.stages.map((s) => [s.name, s.position, s.jobCount, s.wipLimit])).toEqual([
+      ['Intake', 0, 3, null],
+      ['Strip-down', 1, 0, 2],
+      ['Hammers', 2, 1, null],
+      ['Regulation', 3, 0, null],
+      ['Finish', 4, 0, null],
+      ['Delivery', 5, 0, null],
+    ]);
+    expect(board.stages[0]!.jobs.map((j) => [j.id, j.position])).toEqual([
+      [c!.id, 0],
+      [a!.id, 1],
+      [b!.id, 2],
+    ]);
+    expect(board.stages[2]!.jobs[0]).toMatchObject({ id: x!.id, client: { name: 'Harriet Pembleton' }, piano: { maker: 'Carrow & Finch', sizeMm: 1778 }, technicians: [] });
+  });
+
+  it('when jobs are done, cancelled or in an archived stage’s past, then the board leaves them out', async () => {
+    const { agent } = await signUpWorkshop(t);
+    const [intake, stripDown] = await activeStages(agent);
+    const done = await createJob(agent, { stageId: stripDown!.id });
+    const cancelled = await createJob(agent, { stageId: intake!.id });
+    const held = await createJob(agent, { stageId: intake!.id });
+    await agent.patch(`/api/jobs/${done.id}`).send({ version: 1, status: 'done' }).expect(200);
+    await agent.patch(`/api/jobs/${cancelled.id}`).send({ version: 1, status: 'cancelled' }).expect(200);
+    await agent.patch(`/api/jobs/${held.id}`).send({ version: 1, status: 'on_hold' }).expect(200);
+    await agent.patch(`/api/stages/${stripDown!.id}`).send({ isArchived: true }).expect(200);
+
+    const board = await boardOf(agent);
+    expect(board.stages.map((s) => s.name)).not.toContain('Strip-down');
+    expect(jobIdsByStage(board).Intake).toEqual([held.id]);
+    expect(board.stages[0]!.jobs[0]!.status).toBe('on_hold');
+  });
+
+  it('when filtering by text, blocked or technician, then only matching jobs show while stage counts stay whole', async () => {
+    const { agent } = await signUpWorkshop(t);
+    const [intake, , hammers] = await activeStages(agent);
+    const school = await createClient(agent, { name: 'Linwood Hall School (music dept.)' });
+    const upright = await createPiano(agent, school.id, { maker: 'Osterholt', model: '', serialNumber: 'OH-62-4471', type: 'upright', sizeMm: 1260, yearApprox: 1962, keytopMaterial: 'plastic' });
+    const rebush = await createJob(agent, { title: 'Rebush, new dampers, pitch raise', pianoId: upright.id, stageId: intake!.id });
+    const grand = await createJob(agent, { title: 'New hammers', stageId: hammers!.id });
+    await agent.patch(`/api/jobs/${grand.id}`).send({ version: 1, isBlocked: true, blockedReason: 'Waiting for parts' }).expect(200);
+    const tech = await addMember(t, agent, 'technician');
+
+    expect(jobIdsByStage(await boardOf(agent, '?q=linwood'))).toMatchObject({ Intake: [rebush.id], Hammers: [] });
+    expect(jobIdsByStage(await boardOf(agent, '?q=oh-62'))).toMatchObject({ Intake: [rebush.id], Hammers: [] });
+    expect(jobIdsByStage(await boardOf(agent, '?q=CARROW'))).toMatchObject({ Intake: [], Hammers: [grand.id] });
+    const blocked = await boardOf(agent, '?blocked=true');
+    expect(jobIdsByStage(blocked)).toMatchObject({ Intake: [], Hammers: [grand.id] });
+    expect(blocked.stages[0]!.jobCount).toBe(1);
+    expect(jobIdsByStage(await boardOf(agent, '?blocked=false'))).toMatchObject({ Intake: [rebush.id], Hammers: [] });
+    const byTechnician = await boardOf(agent, `?technicianId=${tech.userId}`);
+    expect(byTechnician.stages.flatMap((s) => s.jobs)).toEqual([]);
+    expect(byTechnician.stages.map((s) => s.jobCount)).toEqual([1, 0, 1, 0, 0, 0]);
+  });
+
+  it('when a filter is malformed, then 400 on that field', async () => {
+    const { agent } = await signUpWorkshop(t);
+    for (const [query, field] of [
+      ['?blocked=yes', 'blocked'],
+      ['?technicianId=priya', 'technicianId'],
+      [`?q=${'x'.repeat(201)}`, 'q'],
+    ] as const) {
+      const res = await agent.get(`/api/board${query}`).expect(400);
+      expect(Object.keys(ErrorBody.parse(res.body).error.fields ?? {})).toEqual([field]);
+    }
+  });
+
+  it('when another workshop has jobs, then they never appear; a technician reads the board; nobody signed in gets 401', async () => {
+    const { agent } = await signUpWorkshop(t);
+    const { agent: other } = await signUpWorkshop(t, 'other');
+    await createJob(other);
+    const mine = await createJob(agent);
+    const tech = await addMember(t, agent, 'technician');
+    const board = await boardOf(tech.agent);
+    expect(board.stages.flatMap((s) => s.jobs.map((j) => j.id))).toEqual([mine.id]);
+    await t.request().get('/api/board').expect(401);
+  });
+
+  it('when the board holds 2 or 42 jobs, then it takes the same number of SQL statements', async () => {
+    const { agent } = await signUpWorkshop(t);
+    const stages = await activeStages(agent);
+    await fillStage(agent, stages[0]!.id, 2);
+    const count = async () => {
+      statements = [];
+      await agent.get('/api/board').expect(200);
+      return statements.length;
+    };
+    const withTwo = await count();
+    for (const stage of stages.slice(1)) await fillStage(agent, stage.id, 8);
+    const [row] = await t.sql`select count(*)::int as n from jobs j join stages s on s.id = j.stage_id where s.id = any(${stages.map((s) => s.id)}) and j.position is not null`;
+    expect(row!.n).toBe(42);
+    const withFortyTwo = await count();
+    expect(withFortyTwo).toBe(withTwo);
+    expect(withTwo).toBeLessThanOrEqual(6);
+  });
+});
