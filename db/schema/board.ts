@@ -94,6 +94,8 @@ export const jobStageEvents = pgTable(
     foreignKey({ name: 'job_stage_events_job_same_workshop', columns: [t.jobId, t.workshopId], foreignColumns: [jobs.id, jobs.workshopId] }).onDelete('cascade'),
     foreignKey({ name: 'job_stage_events_from_same_workshop', columns: [t.fromStageId, t.workshopId], foreignColumns: [stages.id, stages.workshopId] }),
     foreignKey({ name: 'job_stage_events_to_same_workshop', columns: [t.toStageId, t.workshopId], foreignColumns: [stages.id, stages.workshopId] }),
+    // A job's first event has no `from`; every later one is a real change of stage.
+    check('job_stage_events_changes_stage', sql`${t.fromStageId} is null or ${t.fromStageId} <> ${t.toStageId}`),
     index().on(t.jobId, t.at),
   ],
 );

@@ -421,3 +421,23 @@ describe('POST /api/jobs/:id/move', () => {
     expect((await positionsIn(t, stripDown!.id)).length + (await positionsIn(t, hammers!.id)).length).toBe(1);
   });
 });
+
+describe('database invariants behind the board', () => {
+  it('when two jobs of a stage get one position, then the database refuses it at commit', async () => {
+    const { agent } = await signUpWorkshop(t);
+    const [intake] = await activeStages(agent);
+    const [a, b] = await fillStage(agent, intake!.id, 2);
+    await expect(t.sql.begin((tx) => tx`update jobs set position = 0 where id = ${b!.id}`)).rejects.toMatchObject({ code: '23505' });
+    expect(await idsByPosition(t, intake!.id)).toEqual([a!.id, b!.id]);
+  });
+
+  it('when a job off the board keeps a position, or a stage event names the same stage twice, then the database refuses it', async () => {
+    const { agent, me } = await signUpWorkshop(t);
+    const job = await createJob(agent);
+    await expect(t.sql`update jobs set status = 'done' where id = ${job.id}`).rejects.toMatchObject({ code: '23514' });
+    await expect(
+      t.sql`insert into job_stage_events (workshop_id, job_id, from_stage_id, to_stage_id) values (${me.workshop.id}, ${job.id}, ${job.stageId}, ${job.stageId})`,
+    ).rejects.toMatchObject({ code: '23514' });
+    expect(await jobRow(job.id)).toMatchObject({ status: 'active', position: 0 });
+  });
+});

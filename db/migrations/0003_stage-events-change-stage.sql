@@ -1,0 +1,1 @@
+ALTER TABLE "job_stage_events" ADD CONSTRAINT "job_stage_events_changes_stage" CHECK ("job_stage_events"."from_stage_id" is null or "job_stage_events"."from_stage_id" <> "job_stage_events"."to_stage_id");
