@@ -18,6 +18,19 @@ export const ERROR_CODES = [
   'payload_too_large',
   'service_unavailable',
   'internal',
+  /** Bench time: the technician's PIN was wrong, they are locked out, or they have none yet. */
+  'pin_incorrect',
+  'pin_locked',
+  'pin_not_set',
+  /** The wall screen's device session is missing, revoked, or refused after too many wrong PINs. */
+  'wall_not_paired',
+  'wall_pin_limit',
+  /** Clocking on to a task that is done or on a job that is not active. */
+  'task_not_open',
+  /** Clocking off when nothing runs. */
+  'not_running',
+  /** The entry lies in an approved week: only the owner may change it. */
+  'week_approved',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -7,3 +7,4 @@ export * from './schemas/clients';
 export * from './schemas/pianos';
 export * from './schemas/stages';
 export * from './schemas/jobs';
+export * from './schemas/bench';

@@ -146,6 +146,10 @@ export const LIVE_EVENT_KINDS = [
   'stages.reordered',
   'client.changed',
   'piano.changed',
+  /** Who is on what changed; `id` is the technician's user id. */
+  'time.changed',
+  /** A job's tasks changed; `id` is the job's id. */
+  'task.changed',
 ] as const;
 export type LiveEventKind = (typeof LIVE_EVENT_KINDS)[number];
 export const LiveEvent = z.object({ kind: z.enum(LIVE_EVENT_KINDS), id: z.string(), at: z.string() });
