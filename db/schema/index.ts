@@ -2,3 +2,4 @@ export * from './workshops';
 export * from './users';
 export * from './clients';
 export * from './board';
+export * from './bench';

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { boolean, check, index, pgEnum, pgTable, text, unique, uuid } from 'drizzle-orm/pg-core';
+import { boolean, check, index, integer, pgEnum, pgTable, text, unique, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, id, instant } from './columns';
 import { workshops } from './workshops';
 
@@ -35,8 +35,20 @@ export const memberships = pgTable(
     role: roleEnum().notNull(),
     isActive: boolean().notNull().default(true),
     createdAt: createdAt(),
+    /** The wall-screen PIN as an argon2id PHC string; never logged, never sent. */
+    pinHash: text(),
+    pinSetAt: instant(),
+    /** Wrong PINs in a row; reset by a right one, by the lock, or by an unlock. */
+    pinFailedCount: integer().notNull().default(0),
+    /** While in the future, the wall screen refuses this member's PIN. */
+    pinLockedUntil: instant(),
   },
-  (t) => [unique('memberships_workshop_user').on(t.workshopId, t.userId), index().on(t.userId)],
+  (t) => [
+    unique('memberships_workshop_user').on(t.workshopId, t.userId),
+    unique('memberships_id_workshop').on(t.id, t.workshopId),
+    index().on(t.userId),
+    check('memberships_pin_failed_count_non_negative', sql`${t.pinFailedCount} >= 0`),
+  ],
 );
 
 /**
