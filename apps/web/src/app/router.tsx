@@ -10,6 +10,7 @@ import { PageRouteError, RootRouteError } from './routes/route-error';
 interface RouteModule {
   Component: ComponentType;
   ErrorBoundary?: ComponentType;
+  handle?: unknown;
   clientLoader?: (queryClient: QueryClient) => LoaderFunction;
 }
 
@@ -44,6 +45,16 @@ export function createRouter(queryClient: QueryClient) {
               children: [
                 { index: true, lazy: lazy(() => import('./routes/home')) },
                 { path: paths.team.path, lazy: lazy(() => import('./routes/team')) },
+                { path: paths.board.path, lazy: lazy(() => import('./routes/board')) },
+                { path: paths.newJob.path, lazy: lazy(() => import('./routes/new-job')) },
+                { path: paths.job.path, lazy: lazy(() => import('./routes/job')) },
+                { path: paths.clients.path, lazy: lazy(() => import('./routes/clients')) },
+                { path: paths.newClient.path, lazy: lazy(() => import('./routes/new-client')) },
+                { path: paths.client.path, lazy: lazy(() => import('./routes/client')) },
+                { path: paths.newPiano.path, lazy: lazy(() => import('./routes/new-piano')) },
+                { path: paths.piano.path, lazy: lazy(() => import('./routes/piano')) },
+                { path: paths.stagesSettings.path, lazy: lazy(() => import('./routes/stages-settings')) },
+                { path: paths.ivoryHelp.path, lazy: lazy(() => import('./routes/ivory-help')) },
               ],
             },
           ],

@@ -25,7 +25,30 @@ export const paths = {
     build: (token: string) => `/invitations/${encodeURIComponent(token)}`,
   },
   team: { path: '/team', build: () => '/team' },
+  board: { path: '/board', build: () => '/board' },
+  newJob: {
+    path: '/jobs/new',
+    build: (options: { stageId?: string; pianoId?: string } = {}) => withQuery('/jobs/new', options),
+  },
+  job: { path: '/jobs/:id', build: (id: string) => `/jobs/${encodeURIComponent(id)}` },
+  clients: { path: '/clients', build: () => '/clients' },
+  newClient: { path: '/clients/new', build: () => '/clients/new' },
+  client: { path: '/clients/:id', build: (id: string) => `/clients/${encodeURIComponent(id)}` },
+  newPiano: {
+    path: '/pianos/new',
+    build: (options: { clientId?: string } = {}) => withQuery('/pianos/new', options),
+  },
+  piano: { path: '/pianos/:id', build: (id: string) => `/pianos/${encodeURIComponent(id)}` },
+  stagesSettings: { path: '/settings/stages', build: () => '/settings/stages' },
+  ivoryHelp: { path: '/help/ivory', build: () => '/help/ivory' },
 } as const;
+
+function withQuery(path: string, params: Record<string, string | undefined>): string {
+  const query = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) if (value) query.set(key, value);
+  const search = query.toString();
+  return search ? `${path}?${search}` : path;
+}
 
 const PUBLIC_PREFIXES = ['/sign-in', '/sign-up', '/reset-password', '/invitations/'];
 

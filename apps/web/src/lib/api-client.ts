@@ -9,6 +9,8 @@ export class ApiError extends Error {
   readonly code: ErrorCode | ClientErrorCode;
   readonly fields: FieldErrors | undefined;
   readonly requestId: string | undefined;
+  /** What else the error body carried beside `error`, e.g. `current` on a version conflict. */
+  readonly details: Readonly<Record<string, unknown>>;
 
   constructor(init: {
     status: number;
@@ -16,12 +18,14 @@ export class ApiError extends Error {
     message: string;
     fields?: FieldErrors | undefined;
     requestId?: string | undefined;
+    details?: Record<string, unknown> | undefined;
   }) {
     super(init.message);
     this.status = init.status;
     this.code = init.code;
     this.fields = init.fields;
     this.requestId = init.requestId;
+    this.details = init.details ?? {};
   }
 }
 
@@ -53,7 +57,7 @@ function codeForStatus(status: number): ErrorCode {
 
 async function toApiError(response: Response): Promise<ApiError> {
   const body: unknown = await response.json().catch(() => undefined);
-  const error = (body as { error?: Record<string, unknown> } | undefined)?.error;
+  const { error, ...details } = (typeof body === 'object' && body !== null ? body : {}) as { error?: Record<string, unknown> };
   const requestId =
     (typeof error?.requestId === 'string' ? error.requestId : undefined) ??
     response.headers.get('x-request-id') ??
@@ -64,7 +68,15 @@ async function toApiError(response: Response): Promise<ApiError> {
     message: typeof error?.message === 'string' ? error.message : `Request failed (${response.status})`,
     fields: error?.fields && typeof error.fields === 'object' ? (error.fields as FieldErrors) : undefined,
     requestId,
+    details,
   });
+}
+
+/** The part of an error body named `key`, checked with `schema`; undefined when absent or malformed. */
+export function errorDetail<T>(error: unknown, key: string, schema: ResponseSchema<T>): T | undefined {
+  if (!isApiError(error)) return undefined;
+  const parsed = schema.safeParse(error.details[key]);
+  return parsed.success ? parsed.data : undefined;
 }
 
 async function request<T>(method: Method, path: string, schema?: ResponseSchema<T>, body?: unknown): Promise<T> {

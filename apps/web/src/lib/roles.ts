@@ -12,3 +12,8 @@ export const ROLE_OPTIONS = (Object.keys(ROLE_LABELS) as Role[]).map((role) => (
 export function canManageTeam(role: Role): boolean {
   return role === 'owner';
 }
+
+/** Owners and foremen run the board: move cards, edit jobs, clients, pianos and stages. Technicians read. */
+export function canRunBoard(role: Role): boolean {
+  return role === 'owner' || role === 'foreman';
+}

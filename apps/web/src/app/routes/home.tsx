@@ -1,14 +1,13 @@
 import { ButtonLink } from '@/components/button';
-import { EmptyState } from '@/components/empty-state';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { useSignedInMember } from '@/features/auth/hooks/use-signed-in-member';
-import { ROLE_LABELS, canManageTeam } from '@/lib/roles';
+import { ROLE_LABELS, canManageTeam, canRunBoard } from '@/lib/roles';
 
 export function Component() {
   const me = useSignedInMember();
   const firstName = me.user.name.split(/\s+/)[0] ?? me.user.name;
-  const isOwner = canManageTeam(me.role);
+  const isRunner = canRunBoard(me.role);
 
   return (
     <>
@@ -22,20 +21,29 @@ export function Component() {
           </>
         }
       />
-      <EmptyState
-        title="The job board arrives here"
-        action={isOwner ? <ButtonLink to={paths.team.build()}>Invite your team</ButtonLink> : undefined}
-      >
-        <p>
-          Soon this page shows every piano in the workshop, stage by stage from arrival to delivery, and who is
-          working on what.
+      <div className="rounded-lg border border-graphite-300 bg-white px-6 py-8">
+        <h2 className="text-lg font-semibold">The board</h2>
+        <p className="mt-1 max-w-prose text-graphite-600">
+          Every piano in the workshop, stage by stage from intake to delivery: what is promised when, what is blocked, and
+          who is on it. {isRunner ? 'Move cards as the work moves.' : 'It updates by itself as the work moves.'}
         </p>
-        <p className="mt-2">
-          {isOwner
-            ? 'While it is on its way, invite your foreman and technicians so their accounts are ready.'
-            : 'Until then there is nothing you need to do here.'}
-        </p>
-      </EmptyState>
+        <div className="mt-5 flex flex-wrap gap-2">
+          <ButtonLink to={paths.board.build()}>Open the board</ButtonLink>
+          {isRunner && (
+            <ButtonLink to={paths.newJob.build()} variant="secondary">
+              Start a job
+            </ButtonLink>
+          )}
+          <ButtonLink to={paths.clients.build()} variant="secondary">
+            Clients
+          </ButtonLink>
+          {canManageTeam(me.role) && (
+            <ButtonLink to={paths.team.build()} variant="secondary">
+              Team
+            </ButtonLink>
+          )}
+        </div>
+      </div>
     </>
   );
 }

@@ -1,0 +1,38 @@
+import type { QueryKey } from '@tanstack/react-query';
+import type { LiveEvent } from '@keybed/shared';
+import { boardKeys } from '@/features/board/api/keys';
+import { clientKeys } from '@/features/clients/api/keys';
+import { jobKeys } from '@/features/jobs/api/keys';
+import { pianoKeys } from '@/features/pianos/api/keys';
+import { stageKeys } from '@/features/stages/api/keys';
+
+/**
+ * The narrowest cached reads each live event can have changed. Events carry only a kind and an
+ * id, so lists and other records that show a name (a card shows its client's) are included too.
+ */
+export function keysFor(event: LiveEvent): QueryKey[] {
+  switch (event.kind) {
+    case 'job.created':
+      return [boardKeys.all, jobKeys.lists(), pianoKeys.details()];
+    case 'job.updated':
+      return [boardKeys.all, jobKeys.detail(event.id), jobKeys.lists(), pianoKeys.details()];
+    case 'job.moved':
+      return [boardKeys.all, jobKeys.detail(event.id), pianoKeys.details()];
+    case 'stage.changed':
+    case 'stages.reordered':
+      return [stageKeys.all, boardKeys.all, jobKeys.details()];
+    case 'client.changed':
+      return [clientKeys.detail(event.id), clientKeys.lists(), boardKeys.all, jobKeys.details(), pianoKeys.all];
+    case 'piano.changed':
+      return [pianoKeys.detail(event.id), pianoKeys.lists(), clientKeys.details(), boardKeys.all, jobKeys.details()];
+    default:
+      // A kind this build does not know yet: refresh the board, the page most likely open.
+      return [boardKeys.all];
+  }
+}
+
+/** After the stream was down, anything may have changed: refresh every board-related read. */
+export const keysAfterReconnect: QueryKey[] = [boardKeys.all, jobKeys.all, stageKeys.all, clientKeys.all, pianoKeys.all];
+
+export const isBoardKey = (key: QueryKey) => key[0] === boardKeys.all[0];
+export const boardMoveKey = boardKeys.moves();

@@ -1,0 +1,113 @@
+import { useMemo, useState } from 'react';
+import { DndContext, DragOverlay, KeyboardSensor, PointerSensor, TouchSensor, useSensor, useSensors } from '@dnd-kit/core';
+import { sortableKeyboardCoordinates } from '@dnd-kit/sortable';
+import type { Board, Job } from '@keybed/shared';
+import { RegionBoundary } from '@/components/region-boundary';
+import type { PreferredLengthUnit } from '@/lib/length-unit';
+import { useMoveJob } from '../api/move-job';
+import { useBoardDrag, type Drop } from '../hooks/use-board-drag';
+import { usePrefersReducedMotion } from '../hooks/use-prefers-reduced-motion';
+import { boardAnnouncements, screenReaderInstructions } from '../lib/announcements';
+import { serverIndexFor } from '../lib/apply-move';
+import { boardCollisions } from '../lib/collisions';
+import { isFullFor } from '../lib/wip';
+import { DroppableStageColumn } from './droppable-stage-column';
+import { JobCard } from './job-card';
+import { SortableJobCard } from './sortable-job-card';
+import { WipConfirmDialog, type HeldMove } from './wip-confirm-dialog';
+
+interface MovableBoardProps {
+  board: Board;
+  unit: PreferredLengthUnit;
+  today: string;
+  isFiltered: boolean;
+}
+
+/** The board for owners and foremen: cards move by mouse, touch and keyboard. */
+export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardProps) {
+  const move = useMoveJob();
+  const isReducedMotion = usePrefersReducedMotion();
+  const [held, setHeld] = useState<{ drop: Drop; view: HeldMove } | null>(null);
+  const sensors = useSensors(
+    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
+    useSensor(TouchSensor, { activationConstraint: { delay: 200, tolerance: 8 } }),
+    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
+  );
+  const jobsById = useMemo(() => new Map<string, Job>(board.stages.flatMap((s) => s.jobs.map((j) => [j.id, j] as const))), [board]);
+  const stagesById = useMemo(() => new Map(board.stages.map((s) => [s.id, s])), [board]);
+
+  function send(drop: Drop) {
+    const job = jobsById.get(drop.jobId);
+    const index = serverIndexFor(board, drop.jobId, drop.toStageId, drop.visibleIndex);
+    if (job && index !== undefined) move.mutate({ job, toStageId: drop.toStageId, index });
+  }
+
+  const drag = useBoardDrag(board, (drop) => {
+    const target = stagesById.get(drop.toStageId);
+    const job = jobsById.get(drop.jobId);
+    if (!target || !job || drop.toStageId === drop.fromStageId || !isFullFor(target.jobCount, target.wipLimit)) {
+      send(drop);
+      return 'commit';
+    }
+    const fromStageName = stagesById.get(drop.fromStageId)?.name ?? '';
+    setHeld({ drop, view: { jobTitle: job.title, fromStageName, toStageName: target.name, jobCount: target.jobCount, wipLimit: target.wipLimit! } });
+    return 'hold';
+  });
+
+  const announcements = useMemo(
+    () =>
+      boardAnnouncements({
+        titleOf: (id) => jobsById.get(id)?.title ?? 'The job',
+        stageNameOf: (id) => stagesById.get(id)?.name ?? 'a stage',
+        placeOf: drag.placeOf,
+      }),
+    // placeOf reads the live layout through a ref, so the board alone decides when names change.
+    [jobsById, stagesById],
+  );
+  const activeJob = drag.activeId ? jobsById.get(drag.activeId) : undefined;
+  const overStageId = drag.activeId ? drag.placeOf(drag.activeId)?.stageId : undefined;
+
+  return (
+    <DndContext
+      sensors={sensors}
+      collisionDetection={boardCollisions(drag.columns)}
+      accessibility={{ announcements, screenReaderInstructions }}
+      {...drag.handlers}
+    >
+      {board.stages.map((stage) => {
+        const cardIds = drag.columns[stage.id] ?? [];
+        return (
+          <RegionBoundary key={stage.id} className="w-72 shrink-0">
+            <DroppableStageColumn
+              stage={stage}
+              cardIds={cardIds}
+              isFiltered={isFiltered}
+              isDropTarget={overStageId === stage.id && drag.originStageId !== stage.id}
+            >
+              {cardIds.map((id) => {
+                const job = jobsById.get(id);
+                return job ? <SortableJobCard key={id} job={job} stageId={stage.id} unit={unit} today={today} /> : null;
+              })}
+            </DroppableStageColumn>
+          </RegionBoundary>
+        );
+      })}
+      <DragOverlay dropAnimation={isReducedMotion ? null : { duration: 150 }}>
+        {activeJob && <JobCard job={activeJob} unit={unit} today={today} isOverlay className="rotate-1 shadow-lg" />}
+      </DragOverlay>
+      <WipConfirmDialog
+        held={held?.view ?? null}
+        onConfirm={() => {
+          if (!held) return;
+          drag.confirmHeld();
+          send(held.drop);
+          setHeld(null);
+        }}
+        onCancel={() => {
+          drag.cancelHeld();
+          setHeld(null);
+        }}
+      />
+    </DndContext>
+  );
+}
