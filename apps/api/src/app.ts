@@ -6,6 +6,7 @@ import { pinoHttp } from 'pino-http';
 import type { Sql } from 'postgres';
 import type { Database } from '@keybed/db/client';
 import type { Config } from './config/env';
+import { createBench } from './bench';
 import { apiNotFound, errorHandler } from './http/errors';
 import { sameOriginOnly, securityHeaders } from './http/security';
 import { sessionMiddleware } from './http/session';
@@ -27,7 +28,7 @@ import { healthRouter } from './modules/health/health.router';
 import { createJobsRepo } from './modules/jobs/jobs.repo';
 import { jobsRouter } from './modules/jobs/jobs.router';
 import { createJobsService } from './modules/jobs/jobs.service';
-import { technicianLookup } from './modules/jobs/technicians';
+import { createTechnicianLookup } from './modules/jobs/technicians';
 import { createPianosRepo } from './modules/pianos/pianos.repo';
 import { pianosRouter } from './modules/pianos/pianos.router';
 import { createPianosService } from './modules/pianos/pianos.service';
@@ -66,8 +67,10 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   const pianos = createPianosService({ repo: createPianosRepo(db), now });
   const clients = createClientsService({ repo: createClientsRepo(db), pianos, now });
   const stages = createStagesService({ repo: createStagesRepo(db), now });
-  const jobs = createJobsService({ repo: createJobsRepo(db), technicians: technicianLookup, now });
-  const board = createBoardService({ repo: createBoardRepo(db, technicianLookup), technicians: technicianLookup });
+  const technicians = createTechnicianLookup(db);
+  const jobs = createJobsService({ repo: createJobsRepo(db), technicians, now });
+  const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians });
+  const bench = createBench({ db, live, sessions, logger, limits: config.limits, now });
 
   app.use(
     pinoHttp({
@@ -91,6 +94,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   api.use(sameOriginOnly(config.appOrigin));
   api.use(healthRouter(sql));
   api.use(sessionMiddleware(sessions, authRepo.findMembership));
+  api.use(bench.wallDevice);
   api.use(authRouter(auth, sessions, config.limits));
   api.use(teamRouter(team, auth, sessions));
   api.use(clientsRouter(clients));
@@ -99,6 +103,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   api.use(jobsRouter(jobs));
   api.use(boardRouter(board));
   api.use(eventsRouter(live));
+  api.use(bench.router);
   api.use(apiNotFound);
   app.use('/api', api);
 

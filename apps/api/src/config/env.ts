@@ -25,6 +25,7 @@ export const EnvSchema = z.object({
   SIGN_IN_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(50),
   RESET_REQUESTS_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
   RESET_REQUESTS_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
+  WALL_PIN_FAILURES_PER_DEVICE_PER_HOUR: z.coerce.number().int().min(1).default(20),
 });
 
 export type Env = z.infer<typeof EnvSchema>;
@@ -41,7 +42,14 @@ export interface Config {
   logLevel: Env['LOG_LEVEL'];
   smtp: { host: string; port: number; secure: boolean; user?: string; pass?: string; from: string };
   session: { idleHours: number; absoluteHours: number };
-  limits: { signInPerAccount: number; signInPerAddress: number; resetPerAccount: number; resetPerAddress: number };
+  limits: {
+    signInPerAccount: number;
+    signInPerAddress: number;
+    resetPerAccount: number;
+    resetPerAddress: number;
+    /** Wrong PINs one wall screen may send in an hour before it is refused. */
+    wallPinFailuresPerDevicePerHour: number;
+  };
 }
 
 /** Parses the environment, failing with a list of every bad variable. */
@@ -69,6 +77,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
       signInPerAddress: e.SIGN_IN_FAILURES_PER_ADDRESS,
       resetPerAccount: e.RESET_REQUESTS_PER_ACCOUNT,
       resetPerAddress: e.RESET_REQUESTS_PER_ADDRESS,
+      wallPinFailuresPerDevicePerHour: e.WALL_PIN_FAILURES_PER_DEVICE_PER_HOUR,
     },
   };
 }

@@ -11,23 +11,47 @@ export interface AuthContext {
   sessionId: string;
 }
 
+/** A paired wall screen, resolved from its device cookie. It can do wall actions and nothing else. */
+export interface WallContext {
+  deviceId: string;
+  workshopId: string;
+}
+
 declare module 'express-serve-static-core' {
   interface Request {
     auth?: AuthContext;
+    wall?: WallContext;
+    /** Set when the request carried a wall-screen cookie that is no longer valid (unpaired). */
+    isWallRevoked?: boolean;
   }
 }
 
-/** Who may call a route: anyone, any signed-in member, or members holding one of these roles. */
-export type Access = 'public' | 'member' | readonly Role[];
+/**
+ * Who may call a route: anyone, any signed-in member, members holding one of these roles, or a
+ * paired wall screen (`'wall'`, which no member session satisfies).
+ */
+export type Access = 'public' | 'member' | 'wall' | readonly Role[];
 
 export function authOf(req: Request): AuthContext {
   if (!req.auth) throw new AppError('unauthenticated', 401, 'Sign in to continue');
   return req.auth;
 }
 
+export function wallOf(req: Request): WallContext {
+  if (req.wall) return req.wall;
+  const message = req.isWallRevoked
+    ? 'This wall screen was unpaired. An owner or foreman can pair it again.'
+    : 'This browser is not paired as a wall screen. An owner or foreman can pair it.';
+  throw new AppError('wall_not_paired', 401, message);
+}
+
 function guard(access: Access): RequestHandler {
   return (req: Request, _res: Response, next: NextFunction) => {
     if (access === 'public') return next();
+    if (access === 'wall') {
+      wallOf(req);
+      return next();
+    }
     const auth = authOf(req);
     if (access !== 'member' && !access.includes(auth.role)) {
       throw new AppError('forbidden', 403, 'Your role in this workshop cannot do that');

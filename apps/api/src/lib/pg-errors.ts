@@ -10,3 +10,13 @@ function codeOf(err: unknown): string | undefined {
 }
 
 export const isUniqueViolation = (err: unknown) => codeOf(err) === PG_UNIQUE_VIOLATION;
+export const PG_EXCLUSION_VIOLATION = '23P01';
+
+export const isExclusionViolation = (err: unknown) => codeOf(err) === PG_EXCLUSION_VIOLATION;
+
+/** The name of the constraint a failed statement broke, when PostgreSQL reported one. */
+export function constraintOf(err: unknown): string | undefined {
+  const e = err as { constraint_name?: unknown; cause?: { constraint_name?: unknown } };
+  const name = e?.constraint_name ?? e?.cause?.constraint_name;
+  return typeof name === 'string' ? name : undefined;
+}

@@ -11,3 +11,4 @@ export * from './time';
 export * from './costing';
 export * from './stock-cost';
 export * from './job-forecast';
+export * from './bench-day';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { Role } from './auth';
 import { Id } from './common';
 import { DateOnly } from './jobs';
 
@@ -261,6 +262,22 @@ export const PIN_LOCK_MINUTES = 5;
 
 export const PinStatus = z.object({ hasPin: z.boolean(), lockedUntil: z.string().nullable(), failedAttempts: z.number() });
 export type PinStatus = z.infer<typeof PinStatus>;
+
+/**
+ * `GET /api/technicians`: the workshop's active members for assigning tasks, picking a timesheet
+ * and unlocking a PIN (`membershipId` is what `/api/team/members/:id/…` takes). Technicians first.
+ */
+export const BenchTechnician = z.object({
+  id: z.string(),
+  membershipId: z.string(),
+  name: z.string(),
+  role: Role,
+  hasPin: z.boolean(),
+  lockedUntil: z.string().nullable(),
+});
+export type BenchTechnician = z.infer<typeof BenchTechnician>;
+export const BenchTechnicianList = z.object({ technicians: z.array(BenchTechnician) });
+export type BenchTechnicianList = z.infer<typeof BenchTechnicianList>;
 
 // ── The wall screen ──────────────────────────────────────────────────────────
 

@@ -1,4 +1,6 @@
 import { sql, type SQL } from 'drizzle-orm';
+import type { Database } from '@keybed/db/client';
+import { jobs } from '@keybed/db/schema';
 
 export interface Technician {
   id: string;
@@ -6,15 +8,35 @@ export interface Technician {
 }
 
 /**
- * The seam for "technicians with open tasks on a job", which the board cards and the technician
- * filter use. Tasks arrive with the bench work; until then no job has an open task, so every
- * job's list is empty and filtering by a technician matches no job. When tasks exist, `forJobs`
- * becomes one query over the tasks of all the given jobs (the board stays at a constant number of
- * statements) and `hasOpenTaskFor` an EXISTS over the job's open tasks.
+ * "Technicians with open tasks on a job" (assigned to a task that is not done), which the board
+ * cards and the technician filter use. `forJobs` is one statement however many jobs it is given,
+ * so the board stays at a constant number of statements; `hasOpenTaskFor` is an EXISTS on the
+ * outer query's job.
  */
-export const technicianLookup = {
-  forJobs: async (_jobIds: readonly string[]): Promise<Map<string, Technician[]>> => new Map(),
-  hasOpenTaskFor: (_technicianId: string): SQL => sql`false`,
-};
+export function createTechnicianLookup(db: Database) {
+  return {
+    async forJobs(jobIds: readonly string[]): Promise<Map<string, Technician[]>> {
+      const byJob = new Map<string, Technician[]>();
+      if (jobIds.length === 0) return byJob;
+      const rows = await db.execute<{ job_id: string; id: string; name: string }>(sql`
+        select distinct t.job_id, u.id, u.name
+        from tasks t
+        join task_assignees a on a.task_id = t.id
+        join users u on u.id = a.user_id
+        where t.job_id in (${sql.join(jobIds.map((id) => sql`${id}::uuid`), sql`, `)}) and t.status <> 'done'
+        order by u.name, u.id`);
+      for (const row of rows) {
+        const list = byJob.get(row.job_id) ?? [];
+        list.push({ id: row.id, name: row.name });
+        byJob.set(row.job_id, list);
+      }
+      return byJob;
+    },
 
-export type TechnicianLookup = typeof technicianLookup;
+    hasOpenTaskFor: (technicianId: string): SQL =>
+      sql`exists (select 1 from tasks t join task_assignees a on a.task_id = t.id
+        where t.job_id = ${jobs.id} and a.user_id = ${technicianId} and t.status <> 'done')`,
+  };
+}
+
+export type TechnicianLookup = ReturnType<typeof createTechnicianLookup>;
