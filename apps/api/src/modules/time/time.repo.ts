@@ -107,10 +107,10 @@ export function createTimeRepo(db: Database) {
     /** The latest instant the technician's entries reach (end, or start while running). */
     async lastEdge(tx: Tx, workshopId: string, technicianId: string) {
       const [row] = await tx
-        .select({ at: sql<string | null>`max(coalesce(${timeEntries.endedAt}, ${timeEntries.startedAt}))` })
+        .select({ at: sql<Date | null>`max(coalesce(${timeEntries.endedAt}, ${timeEntries.startedAt}))`.mapWith(timeEntries.startedAt) })
         .from(timeEntries)
         .where(and(eq(timeEntries.workshopId, workshopId), eq(timeEntries.technicianId, technicianId)));
-      return row?.at ? new Date(row.at) : null;
+      return row?.at ?? null;
     },
 
     /** The task with its job's status, the task row locked (so marking it done waits for us, and we for it). */
