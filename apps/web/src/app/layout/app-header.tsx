@@ -2,14 +2,16 @@ import type { Me } from '@keybed/shared';
 import { Link } from 'react-router-dom';
 import { LogoMark } from '@/components/logo';
 import { paths } from '@/config/paths';
+import { cx } from '@/lib/cx';
 import { ROLE_LABELS } from '@/lib/roles';
 import { MainNav } from './main-nav';
 import { SignOutButton } from './sign-out-button';
 
-export function AppHeader({ me }: { me: Me }) {
+/** `isWide` lines the header up with full-width pages (the board). */
+export function AppHeader({ me, isWide = false }: { me: Me; isWide?: boolean }) {
   return (
     <header className="bg-ink text-paper">
-      <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-1 px-4 pt-2 sm:px-6 lg:px-8 lg:py-1">
+      <div className={cx('mx-auto flex flex-wrap items-center', !isWide && 'max-w-7xl', 'gap-x-6 gap-y-1 px-4 pt-2 sm:px-6 lg:px-8 lg:py-1')}>
         <div className="order-1 flex min-w-0 flex-1 items-center gap-3 py-1 lg:flex-none">
           <LogoMark className="text-graphite-700" />
           <div className="min-w-0">

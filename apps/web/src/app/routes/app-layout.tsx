@@ -36,7 +36,7 @@ export function Component() {
       <div className="flex min-h-dvh flex-col">
         <SkipLink />
         <LiveUpdates />
-        <AppHeader me={me.data} />
+        <AppHeader me={me.data} isWide={isWide} />
         <main id="main" tabIndex={-1} className={cx('mx-auto w-full flex-1 px-4 py-6 sm:px-6 lg:px-8', isWide ? 'lg:py-6' : 'max-w-7xl lg:py-8')}>
           <Outlet />
         </main>

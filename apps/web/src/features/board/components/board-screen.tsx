@@ -39,7 +39,7 @@ export function BoardScreen({ canRunBoard }: { canRunBoard: boolean }) {
           {board.isError && <ErrorState error={board.error} onRetry={() => void board.refetch()} isRetrying={board.isFetching} className="mb-4" />}
           <div
             aria-busy={board.isFetching && board.isPlaceholderData ? true : undefined}
-            className="-mx-4 flex snap-x snap-proximity gap-3 overflow-x-auto px-4 pb-4 sm:-mx-6 sm:px-6 lg:-mx-8 lg:px-8"
+            className="-mx-4 flex snap-x snap-proximity scroll-px-4 gap-3 overflow-x-auto px-4 pb-4 sm:-mx-6 sm:scroll-px-6 sm:px-6 lg:-mx-8 lg:scroll-px-8 lg:px-8"
           >
             {props && (canRunBoard ? <MovableBoard {...props} /> : <StaticBoard {...props} />)}
           </div>

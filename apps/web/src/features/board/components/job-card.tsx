@@ -59,6 +59,7 @@ export function JobCard({ job, unit, today, handle, footerExtras, isOverlay = fa
         {handle}
         <h3 className="min-w-0 flex-1 leading-snug">{title}</h3>
         <PriorityMark priority={job.priority} />
+        {job.status === 'on_hold' && <span className="shrink-0 rounded bg-graphite-200 px-1.5 text-xs font-semibold">On hold</span>}
       </div>
       <p className="mt-1 text-graphite-700">
         {pianoName(job.piano)} <span className="text-graphite-600">· {pianoShape(job.piano, unit)}</span>
@@ -75,10 +76,12 @@ export function JobCard({ job, unit, today, handle, footerExtras, isOverlay = fa
           {formatDay(job.promisedOn)}
         </p>
       )}
-      <div className="mt-2 flex min-h-6 items-center justify-between gap-2 border-t border-graphite-200 pt-1.5">
-        <TechnicianInitials technicians={job.technicians} />
-        {footerExtras && <div className="flex items-center gap-2">{footerExtras}</div>}
-      </div>
+      {(job.technicians.length > 0 || footerExtras) && (
+        <div className="mt-2 flex min-h-6 items-center justify-between gap-2 border-t border-graphite-200 pt-1.5">
+          <TechnicianInitials technicians={job.technicians} />
+          {footerExtras && <div className="ml-auto flex items-center gap-2">{footerExtras}</div>}
+        </div>
+      )}
     </article>
   );
 }

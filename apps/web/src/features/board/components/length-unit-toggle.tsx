@@ -12,7 +12,7 @@ export function LengthUnitToggle() {
           <label
             key={option.value}
             className={cx(
-              'flex min-h-8 cursor-pointer items-center rounded px-2.5 text-sm font-semibold has-focus-visible:outline-3 has-focus-visible:outline-spruce-deep',
+              'relative flex min-h-8 cursor-pointer items-center rounded px-2.5 text-sm font-semibold has-focus-visible:outline-3 has-focus-visible:outline-spruce-deep',
               unit === option.value ? 'bg-walnut text-white' : 'text-ink hover:bg-graphite-100',
             )}
           >
@@ -22,7 +22,7 @@ export function LengthUnitToggle() {
               value={option.value}
               checked={unit === option.value}
               onChange={() => setLengthUnit(option.value)}
-              className="sr-only"
+              className="absolute inset-0 m-0 cursor-pointer opacity-0"
             />
             {option.label}
           </label>

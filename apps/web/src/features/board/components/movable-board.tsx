@@ -1,6 +1,5 @@
 import { useMemo, useState } from 'react';
 import { DndContext, DragOverlay, KeyboardSensor, PointerSensor, TouchSensor, useSensor, useSensors } from '@dnd-kit/core';
-import { sortableKeyboardCoordinates } from '@dnd-kit/sortable';
 import type { Board, Job } from '@keybed/shared';
 import { RegionBoundary } from '@/components/region-boundary';
 import type { PreferredLengthUnit } from '@/lib/length-unit';
@@ -10,11 +9,20 @@ import { usePrefersReducedMotion } from '../hooks/use-prefers-reduced-motion';
 import { boardAnnouncements, screenReaderInstructions } from '../lib/announcements';
 import { serverIndexFor } from '../lib/apply-move';
 import { boardCollisions } from '../lib/collisions';
+import { boardKeyboardCoordinates } from '../lib/keyboard-coordinates';
 import { isFullFor } from '../lib/wip';
 import { DroppableStageColumn } from './droppable-stage-column';
 import { JobCard } from './job-card';
-import { SortableJobCard } from './sortable-job-card';
+import { GripMark, SortableJobCard } from './sortable-job-card';
 import { WipConfirmDialog, type HeldMove } from './wip-confirm-dialog';
+
+/** Long enough for the dialog to close; until then the rest of the page cannot take focus. */
+const AFTER_DIALOG_MS = 50;
+
+/** The card re-renders in its final column after the dialog, so focus goes back to its handle there. */
+function refocusHandle(jobId: string) {
+  setTimeout(() => document.querySelector<HTMLElement>(`[data-move-handle="${CSS.escape(jobId)}"]`)?.focus(), AFTER_DIALOG_MS);
+}
 
 interface MovableBoardProps {
   board: Board;
@@ -31,7 +39,7 @@ export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardPro
   const sensors = useSensors(
     useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
     useSensor(TouchSensor, { activationConstraint: { delay: 200, tolerance: 8 } }),
-    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
+    useSensor(KeyboardSensor, { coordinateGetter: boardKeyboardCoordinates }),
   );
   const jobsById = useMemo(() => new Map<string, Job>(board.stages.flatMap((s) => s.jobs.map((j) => [j.id, j] as const))), [board]);
   const stagesById = useMemo(() => new Map(board.stages.map((s) => [s.id, s])), [board]);
@@ -93,7 +101,8 @@ export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardPro
         );
       })}
       <DragOverlay dropAnimation={isReducedMotion ? null : { duration: 150 }}>
-        {activeJob && <JobCard job={activeJob} unit={unit} today={today} isOverlay className="rotate-1 shadow-lg" />}
+        {/* Not rotated or scaled: keyboard moves measure the lifted card against the others. */}
+        {activeJob && <JobCard job={activeJob} unit={unit} today={today} handle={<GripMark />} isOverlay className="shadow-lg" />}
       </DragOverlay>
       <WipConfirmDialog
         held={held?.view ?? null}
@@ -102,10 +111,12 @@ export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardPro
           drag.confirmHeld();
           send(held.drop);
           setHeld(null);
+          refocusHandle(held.drop.jobId);
         }}
         onCancel={() => {
           drag.cancelHeld();
           setHeld(null);
+          if (held) refocusHandle(held.drop.jobId);
         }}
       />
     </DndContext>

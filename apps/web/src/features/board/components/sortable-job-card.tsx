@@ -4,6 +4,25 @@ import { CSS } from '@dnd-kit/utilities';
 import { cx } from '@/lib/cx';
 import { JobCard, type JobCardProps } from './job-card';
 
+function GripIcon() {
+  return (
+    <svg viewBox="0 0 16 16" aria-hidden="true" className="size-4">
+      <rect x="2" y="3" width="12" height="2" rx="1" fill="currentColor" />
+      <rect x="2" y="7" width="12" height="2" rx="1" fill="currentColor" />
+      <rect x="2" y="11" width="12" height="2" rx="1" fill="currentColor" />
+    </svg>
+  );
+}
+
+/** The handle's look without its behaviour, for the lifted copy of a card. */
+export function GripMark() {
+  return (
+    <span aria-hidden="true" className="-m-1 flex size-7 shrink-0 items-center justify-center text-graphite-600">
+      <GripIcon />
+    </span>
+  );
+}
+
 interface SortableJobCardProps extends Omit<JobCardProps, 'handle' | 'isOverlay'> {
   stageId: string;
 }
@@ -26,14 +45,11 @@ export function SortableJobCard({ stageId, ...card }: SortableJobCardProps) {
       {...attributes}
       aria-roledescription="movable job"
       aria-label={`Move ${card.job.title}`}
+      data-move-handle={card.job.id}
       onKeyDown={onKeyDown as KeyboardEventHandler<HTMLButtonElement> | undefined}
       className="-m-1 flex size-7 shrink-0 cursor-grab touch-none items-center justify-center rounded text-graphite-600 hover:bg-graphite-100 hover:text-ink"
     >
-      <svg viewBox="0 0 16 16" aria-hidden="true" className="size-4">
-        <rect x="2" y="3" width="12" height="2" rx="1" fill="currentColor" />
-        <rect x="2" y="7" width="12" height="2" rx="1" fill="currentColor" />
-        <rect x="2" y="11" width="12" height="2" rx="1" fill="currentColor" />
-      </svg>
+      <GripIcon />
     </button>
   );
 

@@ -28,10 +28,12 @@ export function StageColumn({ stage, children, cardCount, isFiltered, dropRef, i
       )}
     >
       <StageHeader name={stage.name} jobCount={stage.jobCount} wipLimit={stage.wipLimit} shownCount={isFiltered ? cardCount : undefined} />
-      <ol aria-label={`Jobs in ${stage.name}`} className="flex min-h-24 flex-1 flex-col gap-2 p-2">
-        {children}
-      </ol>
-      {cardCount === 0 && <p className="px-3 pb-3 text-sm text-graphite-600">{isFiltered ? 'No matching jobs here.' : 'No jobs here yet.'}</p>}
+      <div className="flex-1 p-2">
+        {cardCount === 0 && <p className="px-1 py-2 text-sm text-graphite-600">{isFiltered ? 'No matching jobs here.' : 'No jobs here yet.'}</p>}
+        <ol aria-label={`Jobs in ${stage.name}`} className="flex min-h-24 flex-col gap-2">
+          {children}
+        </ol>
+      </div>
     </section>
   );
 }

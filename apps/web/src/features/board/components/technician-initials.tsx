@@ -3,7 +3,7 @@ import { initialsOf } from '../lib/initials';
 
 /** Technicians with open tasks on the job, as initials; their full names are read out. */
 export function TechnicianInitials({ technicians }: { technicians: Job['technicians'] }) {
-  if (technicians.length === 0) return <span className="text-xs text-graphite-600">No one assigned</span>;
+  if (technicians.length === 0) return null;
   return (
     <ul aria-label="Technicians" className="flex gap-1">
       {technicians.map((t) => (

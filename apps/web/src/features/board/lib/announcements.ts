@@ -45,8 +45,10 @@ export function boardAnnouncements(ctx: AnnouncementContext): Announcements {
     },
     onDragEnd({ active, over }) {
       const title = ctx.titleOf(String(active.id));
-      if (!over) return `${title} was put back in ${originStage}.`;
-      return `${title} was put down ${whereIs(ctx, String(active.id), String(over.id))}.`;
+      // By now the drop is laid out, so the card's own place is where it landed.
+      const place = over ? ctx.placeOf(String(active.id)) : undefined;
+      if (!place) return `${title} was put back in ${originStage}.`;
+      return `${title} was put down in ${ctx.stageNameOf(place.stageId)}, position ${place.index + 1} of ${place.count}.`;
     },
     onDragCancel({ active }) {
       return `Move cancelled. ${ctx.titleOf(String(active.id))} is back in ${originStage}.`;

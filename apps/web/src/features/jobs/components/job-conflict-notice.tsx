@@ -11,7 +11,11 @@ interface JobConflictNoticeProps {
   onDiscard: () => void;
 }
 
-const list = (keys: Array<keyof JobDraft>) => keys.map((key) => FIELD_LABELS[key]).join(', ');
+/** "title", "title and priority", "title, priority and notes". */
+function list(keys: Array<keyof JobDraft>) {
+  const labels = keys.map((key) => FIELD_LABELS[key]);
+  return labels.length <= 1 ? (labels[0] ?? '') : `${labels.slice(0, -1).join(', ')} and ${labels.at(-1)}`;
+}
 
 /** After a 409: says what happened and lets the member put their changes back over the latest version. */
 export function JobConflictNotice({ theirs, mine, onReapply, onDiscard }: JobConflictNoticeProps) {

@@ -26,7 +26,7 @@ export function JobFacts({ job }: { job: JobDetail }) {
   const unit = useLengthUnit();
   const { piano, client } = job;
   return (
-    <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-1">
+    <div className="grid content-start gap-4 self-start sm:grid-cols-2 lg:grid-cols-1">
       <section aria-labelledby="job-piano-heading" className={panel}>
         <h2 id="job-piano-heading" className="font-semibold">
           Piano: <TextLink to={paths.piano.build(piano.id)}>{pianoName(piano)}</TextLink>

@@ -30,7 +30,7 @@ export function JobFields({ draft, onChange, errorFor }: JobFieldsProps) {
             <Select {...control} name="priority" options={PRIORITY_OPTIONS} value={draft.priority} onChange={(e) => onChange({ priority: e.target.value as JobDraft['priority'] })} />
           )}
         </Field>
-        <Field label="Promised date" hint="Optional" error={errorFor('promisedOn')}>
+        <Field label="Promised date" error={errorFor('promisedOn')}>
           {(control) => <TextInput {...control} name="promisedOn" type="date" value={draft.promisedOn} onChange={(e) => onChange({ promisedOn: e.target.value })} />}
         </Field>
       </div>

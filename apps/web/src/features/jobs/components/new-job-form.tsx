@@ -44,7 +44,7 @@ export function NewJobForm({ pianoId, stages, defaultStageId, onCreated }: NewJo
         <Field label="Stage" error={form.errorFor('stageId')}>
           {(control) => <Select {...control} name="stageId" options={stages.map((s) => ({ value: s.id, label: s.name }))} defaultValue={stageId} />}
         </Field>
-        <Field label="Promised date" hint="Optional" error={form.errorFor('promisedOn')}>
+        <Field label="Promised date" error={form.errorFor('promisedOn')}>
           {(control) => <TextInput {...control} name="promisedOn" type="date" />}
         </Field>
         <Field label="Priority" error={form.errorFor('priority')}>

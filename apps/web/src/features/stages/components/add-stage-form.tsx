@@ -37,11 +37,11 @@ export function AddStageForm() {
   return (
     <form ref={form.formRef} noValidate onSubmit={submit} className="space-y-3">
       <FormError error={create.error} except={['validation_failed']} />
-      <div className="grid gap-3 sm:grid-cols-[1fr_8rem_auto] sm:items-start">
+      <div className="grid gap-3 sm:grid-cols-[1fr_10rem_auto] sm:items-start">
         <Field label="Stage name" error={form.errorFor('name')}>
           {(control) => <TextInput {...control} value={name} onChange={(e) => { setName(e.target.value); form.clearField('name'); }} />}
         </Field>
-        <Field label="WIP limit" hint="Optional" error={form.errorFor('wipLimit')}>
+        <Field label="WIP limit (optional)" error={form.errorFor('wipLimit')}>
           {(control) => (
             <TextInput {...control} inputMode="numeric" placeholder="None" value={wipText} onChange={(e) => { setWipText(e.target.value); form.clearField('wipLimit'); }} />
           )}

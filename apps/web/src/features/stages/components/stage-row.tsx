@@ -92,7 +92,7 @@ export function StageRow({ stage, place, count, onMove, isReordering }: StageRow
           <Button size="sm" variant="secondary" onClick={archive} isPending={update.isPending && update.variables?.changes.isArchived === true}>
             Archive<span className="sr-only"> {stage.name}</span>
           </Button>
-          <span className="text-sm text-graphite-600 tabular-figures">{jobsLabel(stage.jobCount)}</span>
+          <span className="w-14 text-sm text-graphite-600 tabular-figures">{jobsLabel(stage.jobCount)}</span>
         </div>
       </form>
       {update.isError && (
