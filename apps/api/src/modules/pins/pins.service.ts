@@ -83,7 +83,7 @@ export function createPinsService({ repo, logger, now, devicePerHour }: Deps) {
       await repo.setFailures(tx, member.membershipId, failed, null);
       const left = PIN_FAILURES_BEFORE_LOCK - failed;
       return {
-        error: new AppError('pin_incorrect', 403, `Wrong PIN. ${plural(left, 'more try')} before a ${PIN_LOCK_MINUTES}-minute lock.`, { pin: ['Wrong PIN'] }, { triesLeft: left }),
+        error: new AppError('pin_incorrect', 403, `Wrong PIN. ${left} more ${left === 1 ? 'try' : 'tries'} before a ${PIN_LOCK_MINUTES}-minute lock.`, { pin: ['Wrong PIN'] }, { triesLeft: left }),
         log: { msg: 'wrong wall PIN', membershipId: member.membershipId, failedCount: failed },
       };
     });
