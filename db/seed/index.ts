@@ -2,9 +2,11 @@ import { and, asc, count, eq, inArray, isNotNull, isNull } from 'drizzle-orm';
 import type { Database } from '../client';
 import { DEFAULT_STAGE_NAMES } from '@keybed/shared';
 import { clients, jobs, jobStageEvents, memberships, pianos, stages, users, workshops } from '../schema/index';
+import { seedBench } from './bench';
 import { DEMO_CLIENTS, DEMO_JOBS, DEMO_MEMBERS, DEMO_PASSWORD, DEMO_PIANOS, DEMO_WORKSHOP, demoDate, demoInstant } from './demo';
 
 export { DEMO_MEMBERS, DEMO_PASSWORD, DEMO_WORKSHOP };
+export { DEMO_PINS } from './bench-demo';
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
 
@@ -35,6 +37,7 @@ export async function seedDemo(db: Database, hashPassword: (password: string) =>
     await tx.insert(clients).values(DEMO_CLIENTS.map((c) => ({ ...c, workshopId: DEMO_WORKSHOP.id }))).onConflictDoNothing();
     await tx.insert(pianos).values(DEMO_PIANOS.map((p) => ({ ...p, workshopId: DEMO_WORKSHOP.id }))).onConflictDoNothing();
     jobCount = await seedJobs(tx, idByEmail.get('tom@fennick.example') ?? null, now);
+    await seedBench(tx, hashPassword, now);
   });
   const [workshop] = await db.select({ name: workshops.name }).from(workshops).where(eq(workshops.id, DEMO_WORKSHOP.id));
   return { workshop: workshop?.name ?? DEMO_WORKSHOP.name, members: DEMO_MEMBERS.length, jobs: jobCount };
