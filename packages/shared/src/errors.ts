@@ -31,6 +31,10 @@ export const ERROR_CODES = [
   'not_running',
   /** The entry lies in an approved week: only the owner may change it. */
   'week_approved',
+  /** Parts: not enough on hand for that use, and the workshop does not allow negative stock. */
+  'insufficient_stock',
+  /** Estimates: the estimate's status does not allow that (editing an issued one, accepting a draft). */
+  'estimate_status',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -8,3 +8,7 @@ export * from './schemas/pianos';
 export * from './schemas/stages';
 export * from './schemas/jobs';
 export * from './schemas/bench';
+export * from './schemas/settings';
+export * from './schemas/parts';
+export * from './schemas/estimates';
+export * from './schemas/costing';

@@ -12,3 +12,5 @@ export * from './costing';
 export * from './stock-cost';
 export * from './job-forecast';
 export * from './bench-day';
+export * from './quantity';
+export * from './estimate';

@@ -1,6 +1,15 @@
 /**
  * Money arithmetic in integer minor units (pence for GBP). Products that could pass 2^53 are done in
  * BigInt; every rounding rule is one named function here.
+ *
+ * Keybed's money rule, applied everywhere (estimates, invoices, costing):
+ * - a line's amount = quantity × unit price, rounded half away from zero to the minor unit, per line
+ *   ({@link lineAmountMinor}; labour lines minutes × hourly price / 60 the same way);
+ * - tax is taken once on the total net of the document, rounded half-up ({@link taxMinor} with the
+ *   default 'half-up'), not per line. HMRC VAT Notice 700 §17.5 and VATREC12010 allow the total VAT
+ *   on an invoice to be rounded down to the whole penny; Keybed uses half-up, which the same
+ *   guidance accepts when applied consistently, and keeps 'down' available as a rule.
+ * - a cost is rounded the same way per item (a time entry, a stock issue) before summing.
  */
 
 /** How a fractional amount of minor units is made whole. */

@@ -150,6 +150,14 @@ export const LIVE_EVENT_KINDS = [
   'time.changed',
   /** A job's tasks changed; `id` is the job's id. */
   'task.changed',
+  /** A job's estimates changed; `id` is the job's id. */
+  'estimate.changed',
+  /** A part's catalogue entry or stock changed; `id` is the part's id. */
+  'part.changed',
+  /** A job's costs changed (parts used, a sublet bill); `id` is the job's id. */
+  'costing.changed',
+  /** Workshop settings or cost rates changed; `id` is the workshop's id. */
+  'settings.changed',
 ] as const;
 export type LiveEventKind = (typeof LIVE_EVENT_KINDS)[number];
 export const LiveEvent = z.object({ kind: z.enum(LIVE_EVENT_KINDS), id: z.string(), at: z.string() });
