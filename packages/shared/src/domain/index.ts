@@ -14,3 +14,5 @@ export * from './job-forecast';
 export * from './bench-day';
 export * from './quantity';
 export * from './estimate';
+export * from './job-budget';
+export * from './utilisation';

@@ -80,4 +80,12 @@ describe('forecastAtCompletion', () => {
     expect(forecast.forecastMarginPercent).toBeNull();
     expect(forecast.isBelowTargetMargin).toBe(true);
   });
+
+  it('when a sublet refinish is budgeted and then billed, then cost to date and the forecast count it once', () => {
+    // Black polyester refinish sublet: £1,450.00 budgeted cost (scenario); billed later at £1,480.00.
+    const before = forecastAtCompletion({ ...salonGrand, priceMinor: 491000, unbilledSubletMinor: 145000 });
+    expect(before).toMatchObject({ costToDateMinor: 108800, forecastCostMinor: 155906 + 145000 });
+    const after = forecastAtCompletion({ ...salonGrand, priceMinor: 491000, subletCostToDateMinor: 148000, unbilledSubletMinor: 0 });
+    expect(after).toMatchObject({ costToDateMinor: 108800 + 148000, forecastCostMinor: 155906 + 148000 });
+  });
 });

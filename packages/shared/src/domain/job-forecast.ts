@@ -16,6 +16,10 @@ export interface ForecastInput {
   averageCostRateMinorPerHour: number;
   /** Budgeted parts not yet issued to the job, at cost. */
   unusedBudgetedPartsMinor: number;
+  /** Suppliers' bills for sublet work received so far (0 when left out). */
+  subletCostToDateMinor?: number;
+  /** Budgeted sublet cost not yet billed (0 when left out). */
+  unbilledSubletMinor?: number;
   targetMarginBasisPoints: number;
   /** The foreman's own estimate of minutes still to go; replaces budget − to date when given. */
   estimatedMinutesToComplete?: number;
@@ -38,16 +42,16 @@ export interface JobForecast {
 }
 
 /**
- * Forecast cost = cost to date + remaining minutes × average cost rate (rounded half-up once) +
- * unused budgeted parts. Remaining minutes = the foreman's estimate when given, else the budget
+ * Cost to date = labour + parts + sublet bills. Forecast cost = cost to date + remaining minutes ×
+ * average cost rate (rounded half-up once) + unused budgeted parts + unbilled budgeted sublet. Remaining minutes = the foreman's estimate when given, else the budget
  * left (never below 0). Below target when margin < target (exact integer comparison; a price of 0
  * or less is always below). Over hours when minutes to date exceed the budget.
  */
 export function forecastAtCompletion(input: ForecastInput): JobForecast {
-  const costToDateMinor = input.labourCostToDateMinor + input.partsCostToDateMinor;
+  const costToDateMinor = input.labourCostToDateMinor + input.partsCostToDateMinor + (input.subletCostToDateMinor ?? 0);
   const remainingMinutes = input.estimatedMinutesToComplete ?? Math.max(0, input.budgetedMinutes - input.minutesToDate);
   const remainingLabourMinor = roundHalfUp(BigInt(remainingMinutes) * BigInt(input.averageCostRateMinorPerHour), 60n);
-  const forecastCostMinor = costToDateMinor + remainingLabourMinor + input.unusedBudgetedPartsMinor;
+  const forecastCostMinor = costToDateMinor + remainingLabourMinor + input.unusedBudgetedPartsMinor + (input.unbilledSubletMinor ?? 0);
   const forecastMarginMinor = input.priceMinor - forecastCostMinor;
   const isPriced = input.priceMinor > 0;
   return {

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { EMPTY_STOCK, averageUnitCostMinor, issueStock, receiveStock } from './stock-cost';
+import { EMPTY_STOCK, averageUnitCostMinor, issueStock, issueStockAllowingShortfall, receiveStock } from './stock-cost';
 
 // Weighted average cost is a permitted cost formula under IAS 2 (¶25 from memory; TRADE.md §8).
 describe('moving weighted-average cost (IAS 2, from memory)', () => {
@@ -82,5 +82,25 @@ describe('moving weighted-average cost (IAS 2, from memory)', () => {
         expect(issued + stock.valueMinor).toBe(received);
       }),
     );
+  });
+});
+
+describe('issueStockAllowingShortfall', () => {
+  it('when enough is on hand, then it is the ordinary weighted-average issue', () => {
+    const stock = receiveStock(EMPTY_STOCK, 4000, 9500); // 4 damper felt sets at £95 (scenario)
+    expect(issueStockAllowingShortfall(stock, 1000, 1)).toEqual(issueStock(stock, 1000));
+  });
+
+  it('when 1 is on hand and 3 are issued, then the one costs its value and the shortfall the average', () => {
+    const stock = receiveStock(EMPTY_STOCK, 1000, 6200); // one box of tuning pins at £62
+    expect(issueStockAllowingShortfall(stock, 3000, 9999)).toEqual({ stock: { quantityMilli: -2000, valueMinor: -12400 }, costMinor: 18600 });
+  });
+
+  it('when nothing is on hand, then the shortfall costs the catalogue price', () => {
+    expect(issueStockAllowingShortfall(EMPTY_STOCK, 1500, 1450)).toEqual({ stock: { quantityMilli: -1500, valueMinor: -2175 }, costMinor: 2175 });
+  });
+
+  it('when the quantity is not positive, then RangeError', () => {
+    expect(() => issueStockAllowingShortfall(EMPTY_STOCK, 0, 100)).toThrow(RangeError);
   });
 });

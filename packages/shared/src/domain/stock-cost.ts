@@ -44,3 +44,18 @@ export function issueStock(stock: StockValue, quantityMilli: number): { stock: S
 export function averageUnitCostMinor(stock: StockValue): number | null {
   return stock.quantityMilli > 0 ? roundHalfUp(BigInt(stock.valueMinor) * 1000n, BigInt(stock.quantityMilli)) : null;
 }
+
+/**
+ * Issues quantityMilli where the workshop lets stock go below zero. Up to what is on hand it is
+ * {@link issueStock}; the shortfall is costed at the average unit cost before the issue, or at
+ * `fallbackUnitCostMinor` (the catalogue cost) when nothing was on hand, rounded half-up.
+ */
+export function issueStockAllowingShortfall(stock: StockValue, quantityMilli: number, fallbackUnitCostMinor: number): { stock: StockValue; costMinor: number } {
+  if (!(quantityMilli > 0)) throw new RangeError('An issue must take a positive quantity');
+  const onHand = Math.max(0, stock.quantityMilli);
+  if (quantityMilli <= onHand) return issueStock(stock, quantityMilli);
+  const unitCost = averageUnitCostMinor(stock) ?? fallbackUnitCostMinor;
+  const fromStock = onHand > 0 ? stock.valueMinor : 0;
+  const costMinor = fromStock + lineAmountMinor(quantityMilli - onHand, unitCost);
+  return { stock: { quantityMilli: stock.quantityMilli - quantityMilli, valueMinor: stock.valueMinor - costMinor }, costMinor };
+}

@@ -15,6 +15,13 @@ export const MinorAmount = z
   .min(0, { error: 'Cannot be negative' })
   .max(10_000_000_000, { error: 'Amount is too large' });
 
+/** A price or cost per hour in minor units, at most 1 000 000.00 an hour. */
+export const RateMinorPerHour = z
+  .number({ error: 'Enter an hourly rate in minor units (pence)' })
+  .int({ error: 'Use whole minor units (pence)' })
+  .min(0, { error: 'Cannot be negative' })
+  .max(100_000_000, { error: 'Rate is too large' });
+
 /** Basis points from 0 to 10 000 (0 %–100 %). */
 export const BasisPoints = z
   .number({ error: 'Enter basis points (2000 = 20 %)' })
@@ -61,7 +68,7 @@ export const PutSettingsInput = z
   .object({
     currency: CurrencyCode,
     taxRateBasisPoints: BasisPoints,
-    labourRateMinorPerHour: MinorAmount,
+    labourRateMinorPerHour: RateMinorPerHour,
     /** The forecast margin below which a job is flagged. */
     targetMarginBasisPoints: BasisPoints.max(9_999, { error: 'Must be below 100 %' }),
     allowNegativeStock: z.boolean({ error: 'Say whether stock may go below zero' }),
@@ -101,7 +108,7 @@ export type WorkshopSettings = z.infer<typeof WorkshopSettings>;
  */
 export const CreateCostRateInput = z.object({
   effectiveFrom: DateOnly,
-  rateMinorPerHour: MinorAmount.min(1, { error: 'A cost rate must be above zero' }),
+  rateMinorPerHour: RateMinorPerHour.min(1, { error: 'A cost rate must be above zero' }),
 });
 export type CreateCostRateInput = z.infer<typeof CreateCostRateInput>;
 
