@@ -183,7 +183,7 @@ describe('offline replay (at and idempotencyKey)', () => {
     expect(errorOf(stale.body).message).toContain('older than 24 hours');
     await own.priya.agent.post('/api/time/clock-on').send({ taskId: tasks[0]!.id, at: '2026-03-07T10:00:00Z' }).expect(201);
     const before = await own.priya.agent.post('/api/time/clock-on').send({ taskId: tasks[1]!.id, at: '2026-03-07T09:00:00Z' }).expect(409);
-    expect(errorOf(before.body).message).toContain('before');
+    expect(errorOf(before.body).message).toContain('not after');
     await own.priya.agent.post('/api/time/clock-off').send({ at: '2026-03-07T09:59:00Z' }).expect(409);
     expect((await entriesOf(own.priya.userId)).map((r) => [r.started_at.toISOString(), r.ended_at])).toEqual([['2026-03-07T10:00:00.000Z', null]]);
   });

@@ -44,10 +44,23 @@ function actionTime(at: string | undefined, now: Date): Date {
   return new Date(Math.min(ms, now.getTime()));
 }
 
+/**
+ * Refuses a start before the technician's latest recorded moment (the end of their last entry,
+ * or the start of the running one: a clock-on must come strictly after that start).
+ */
+function checkAfter(name: string, latest: { startedAt: Date; endedAt: Date | null } | undefined, at: Date) {
+  if (!latest) return;
+  const edge = latest.endedAt ?? latest.startedAt;
+  const isRunning = latest.endedAt === null;
+  if (at.getTime() < edge.getTime() || (isRunning && at.getTime() === edge.getTime())) {
+    throw new AppError('conflict', 409, `That time is not after ${name}'s last time entry (${edge.toISOString()}). Replay actions in order, or ask the foreman to correct the timesheet.`);
+  }
+}
+
 export function createClockService({ repo, now }: { repo: TimeRepo; now: () => Date }) {
-  async function result(tx: Tx, workshopId: string, entryId: string, stoppedId: string | null, at: Date): Promise<ClockResult> {
+  async function result(tx: Tx, workshopId: string, timeZone: string, entryId: string, stoppedId: string | null, at: Date): Promise<ClockResult> {
     const rows = await repo.entriesByIds(workshopId, stoppedId ? [entryId, stoppedId] : [entryId], tx);
-    const views = await entryViews(repo, workshopId, rows, at, tx);
+    const views = await entryViews(repo, workshopId, rows, at, tx, timeZone);
     return { entry: views.find((v) => v.id === entryId)!, stopped: views.find((v) => v.id === stoppedId) ?? null };
   }
 
@@ -55,14 +68,6 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
     const member = await repo.lockTechnician(tx, actor.workshopId, actor.technicianId);
     if (!member?.isActive) throw notFound('That technician');
     return member;
-  }
-
-  /** Refuses a time at or before the technician's latest recorded moment. */
-  async function checkAfterLastEntry(tx: Tx, actor: ClockActor, name: string, at: Date) {
-    const edge = await repo.lastEdge(tx, actor.workshopId, actor.technicianId);
-    if (edge && at.getTime() < edge.getTime()) {
-      throw new AppError('conflict', 409, `That time is before ${name}'s last time entry (${edge.toISOString()}). Replay actions in order, or ask the foreman to correct the timesheet.`);
-    }
   }
 
   return {
@@ -75,13 +80,14 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
       return repo
         .transaction(async (tx): Promise<ClockOutcome> => {
           const member = await lockActiveTechnician(tx, actor);
+          const { timeZone } = member;
           const nowAt = now();
           if (input.idempotencyKey) {
             const prior = await repo.findByKey(tx, workshopId, input.idempotencyKey, 'start');
             if (prior) {
               if (prior.technicianId !== technicianId || prior.taskId !== input.taskId) throw keyReused();
               const stoppedId = await repo.findEndedAt(tx, workshopId, technicianId, prior.startedAt);
-              return { result: await result(tx, workshopId, prior.id, stoppedId ?? null, nowAt), isNew: false };
+              return { result: await result(tx, workshopId, timeZone, prior.id, stoppedId ?? null, nowAt), isNew: false };
             }
           }
           const at = actionTime(input.at, nowAt);
@@ -91,13 +97,11 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
           if (task.jobStatus !== 'active') {
             throw new AppError('task_not_open', 409, `The job “${task.jobTitle}” is ${JOB_STATUS_WORDS[task.jobStatus]}. Choose a task of an active job.`);
           }
-          const running = await repo.findRunning(tx, workshopId, technicianId);
-          if (running?.taskId === task.id) return { result: await result(tx, workshopId, running.id, null, nowAt), isNew: false };
-          await checkAfterLastEntry(tx, actor, member.name, at);
-          if (running && at.getTime() <= running.startedAt.getTime()) {
-            throw new AppError('conflict', 409, `${member.name}'s running entry started at that moment; try again.`);
-          }
-          await checkWeekOpen(repo, tx, workshopId, technicianId, [at]);
+          const latest = await repo.latestEntry(tx, workshopId, technicianId);
+          const running = latest && latest.endedAt === null ? latest : undefined;
+          if (running?.taskId === task.id) return { result: await result(tx, workshopId, timeZone, running.id, null, nowAt), isNew: false };
+          checkAfter(member.name, latest, at);
+          await checkWeekOpen(repo, tx, workshopId, technicianId, [at], timeZone);
           if (running) await repo.stop(tx, running.id, at, null);
           const id = await repo.insert(tx, {
             workshopId,
@@ -116,7 +120,7 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
           await notifyLive(tx, workshopId, 'task.changed', task.jobId, nowAt);
           if (running && running.jobId !== task.jobId) await notifyLive(tx, workshopId, 'task.changed', running.jobId, nowAt);
           await notifyLive(tx, workshopId, 'time.changed', technicianId, nowAt);
-          return { result: await result(tx, workshopId, id, running?.id ?? null, nowAt), isNew: true };
+          return { result: await result(tx, workshopId, timeZone, id, running?.id ?? null, nowAt), isNew: true };
         })
         .catch(translateEntryConstraint);
     },
@@ -127,12 +131,13 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
       return repo
         .transaction(async (tx): Promise<ClockOutcome> => {
           const member = await lockActiveTechnician(tx, actor);
+          const { timeZone } = member;
           const nowAt = now();
           if (input.idempotencyKey) {
             const prior = await repo.findByKey(tx, workshopId, input.idempotencyKey, 'stop');
             if (prior) {
               if (prior.technicianId !== technicianId) throw keyReused();
-              return { result: await result(tx, workshopId, prior.id, null, nowAt), isNew: false };
+              return { result: await result(tx, workshopId, timeZone, prior.id, null, nowAt), isNew: false };
             }
           }
           const at = actionTime(input.at, nowAt);
@@ -141,11 +146,11 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
           if (at.getTime() <= running.startedAt.getTime()) {
             throw new AppError('conflict', 409, `That time is not after the start of ${member.name}'s running entry (${running.startedAt.toISOString()}).`);
           }
-          await checkWeekOpen(repo, tx, workshopId, technicianId, [at]);
+          await checkWeekOpen(repo, tx, workshopId, technicianId, [at], timeZone);
           await repo.stop(tx, running.id, at, input.idempotencyKey ?? null);
           await notifyLive(tx, workshopId, 'time.changed', technicianId, nowAt);
           await notifyLive(tx, workshopId, 'task.changed', running.jobId, nowAt);
-          return { result: await result(tx, workshopId, running.id, null, nowAt), isNew: true };
+          return { result: await result(tx, workshopId, timeZone, running.id, null, nowAt), isNew: true };
         })
         .catch(translateEntryConstraint);
     },

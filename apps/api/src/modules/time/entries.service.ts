@@ -42,7 +42,7 @@ export function createEntriesService({ repo, now }: { repo: TimeRepo; now: () =>
           const { workshopId } = auth;
           const technicianId = await repo.peekEntryTechnician(tx, workshopId, id);
           if (!technicianId) throw notFound('That time entry');
-          await repo.lockTechnician(tx, workshopId, technicianId);
+          const { timeZone } = (await repo.lockTechnician(tx, workshopId, technicianId))!;
           const old = (await repo.lockEntry(tx, workshopId, id))!;
           const at = now();
           const startedAt = input.startedAt ? new Date(input.startedAt) : old.startedAt;
@@ -56,7 +56,7 @@ export function createEntriesService({ repo, now }: { repo: TimeRepo; now: () =>
           const isSame = startedAt.getTime() === old.startedAt.getTime() && endedAt?.getTime() === old.endedAt?.getTime() && task.id === old.taskId;
           if (isSame) throw field('startedAt', 'Nothing would change');
           const touched = [old.startedAt, startedAt, ...(old.endedAt ? [old.endedAt] : []), ...(endedAt ? [endedAt] : [])];
-          await checkWeekOpen(repo, tx, workshopId, technicianId, touched, auth.role);
+          await checkWeekOpen(repo, tx, workshopId, technicianId, touched, timeZone, auth.role);
           await repo.update(tx, id, {
             startedAt,
             endedAt,
@@ -71,7 +71,6 @@ export function createEntriesService({ repo, now }: { repo: TimeRepo; now: () =>
             entryId: id,
             reason: input.reason,
             byUserId: auth.userId,
-            at,
             oldStartedAt: old.startedAt,
             oldEndedAt: old.endedAt,
             oldTaskId: old.taskId,
@@ -81,7 +80,7 @@ export function createEntriesService({ repo, now }: { repo: TimeRepo; now: () =>
           });
           await notifyLive(tx, workshopId, 'time.changed', technicianId, at);
           const rows = await repo.entriesByIds(workshopId, [id], tx);
-          return (await entryViews(repo, workshopId, rows, at, tx))[0]!;
+          return (await entryViews(repo, workshopId, rows, at, tx, timeZone))[0]!;
         })
         .catch(translateEntryConstraint),
   };

@@ -11,11 +11,12 @@ export const approvalKey = (technicianId: string, weekStart: string) => `${techn
 
 /**
  * Turns entry rows into the wire shape with their corrections and week locks: two more
- * statements for the whole list (corrections, approved weeks), never one per entry.
+ * statements for the whole list (corrections, approved weeks), never one per entry, and one for
+ * the workshop's time zone unless the caller knows it.
  */
-export async function entryViews(repo: TimeRepo, workshopId: string, rows: EntryRow[], now: Date, q?: Db): Promise<TimeEntry[]> {
+export async function entryViews(repo: TimeRepo, workshopId: string, rows: EntryRow[], now: Date, q?: Db, knownTimeZone?: string): Promise<TimeEntry[]> {
   if (rows.length === 0) return [];
-  const { timeZone } = await repo.workshopClock(workshopId, q);
+  const timeZone = knownTimeZone ?? (await repo.workshopClock(workshopId, q)).timeZone;
   const corrections = await repo.corrections(rows.map((r) => r.id), q);
   const weeks = await repo.approvedWeeks(workshopId, [...new Set(rows.map((r) => r.technician.id))], q);
   const approved = new Set(weeks.map((w) => approvalKey(w.technicianId, w.weekStart)));

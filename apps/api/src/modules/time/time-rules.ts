@@ -2,24 +2,19 @@ import type { Role } from '@keybed/shared';
 import { AppError } from '../../http/errors';
 import { constraintOf, isExclusionViolation, isUniqueViolation } from '../../lib/pg-errors';
 import type { Tx } from '../auth/auth.repo';
-import { approvalKey, weekKeyOf } from './entry-view';
+import { weekKeyOf } from './entry-view';
 import type { TimeRepo } from './time.repo';
 
 /**
- * Refuses a change touching an approved week of the technician (the weeks of the given instants)
- * unless the caller is the owner.
+ * Refuses a change touching an approved week of the technician (the weeks of the given instants,
+ * in the workshop's time zone) unless the caller is the owner.
  */
-export async function checkWeekOpen(repo: TimeRepo, tx: Tx, workshopId: string, technicianId: string, instants: Date[], role?: Role) {
+export async function checkWeekOpen(repo: TimeRepo, tx: Tx, workshopId: string, technicianId: string, instants: Date[], timeZone: string, role?: Role) {
   if (role === 'owner') return;
-  const { timeZone } = await repo.workshopClock(workshopId, tx);
-  const weeks = await repo.approvedWeeks(workshopId, [technicianId], tx);
-  const approved = new Map(weeks.map((w) => [approvalKey(w.technicianId, w.weekStart), w]));
-  for (const at of instants) {
-    const week = approved.get(approvalKey(technicianId, weekKeyOf(at, timeZone)));
-    if (week) {
-      const by = week.by ? ` by ${week.by.name}` : '';
-      throw new AppError('week_approved', 409, `The week of ${week.weekStart} was approved${by}. Only the owner can change it now.`);
-    }
+  const [week] = await repo.approvalsOf(workshopId, technicianId, [...new Set(instants.map((at) => weekKeyOf(at, timeZone)))], tx);
+  if (week) {
+    const by = week.by ? ` by ${week.by.name}` : '';
+    throw new AppError('week_approved', 409, `The week of ${week.weekStart} was approved${by}. Only the owner can change it now.`);
   }
 }
 

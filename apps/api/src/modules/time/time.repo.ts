@@ -61,9 +61,10 @@ export function createTimeRepo(db: Database) {
      */
     async lockTechnician(tx: Tx, workshopId: string, userId: string) {
       const [row] = await tx
-        .select({ membershipId: memberships.id, isActive: memberships.isActive, name: users.name })
+        .select({ membershipId: memberships.id, isActive: memberships.isActive, name: users.name, timeZone: workshops.timeZone })
         .from(memberships)
         .innerJoin(users, eq(users.id, memberships.userId))
+        .innerJoin(workshops, eq(workshops.id, memberships.workshopId))
         .where(and(eq(memberships.workshopId, workshopId), eq(memberships.userId, userId)))
         .for('update', { of: memberships });
       return row;
@@ -104,13 +105,19 @@ export function createTimeRepo(db: Database) {
       return row;
     },
 
-    /** The latest instant the technician's entries reach (end, or start while running). */
-    async lastEdge(tx: Tx, workshopId: string, technicianId: string) {
+    /**
+     * The technician's latest entry. One technician's entries never overlap, so the one that
+     * started last also reaches furthest: it is the running entry if one runs, and its end (or
+     * start, while running) is the latest moment recorded for the technician.
+     */
+    async latestEntry(tx: Tx, workshopId: string, technicianId: string) {
       const [row] = await tx
-        .select({ at: sql<Date | null>`max(coalesce(${timeEntries.endedAt}, ${timeEntries.startedAt}))`.mapWith(timeEntries.startedAt) })
+        .select({ id: timeEntries.id, taskId: timeEntries.taskId, jobId: timeEntries.jobId, startedAt: timeEntries.startedAt, endedAt: timeEntries.endedAt })
         .from(timeEntries)
-        .where(and(eq(timeEntries.workshopId, workshopId), eq(timeEntries.technicianId, technicianId)));
-      return row?.at ?? null;
+        .where(and(eq(timeEntries.workshopId, workshopId), eq(timeEntries.technicianId, technicianId)))
+        .orderBy(desc(timeEntries.startedAt))
+        .limit(1);
+      return row;
     },
 
     /** The task with its job's status, the task row locked (so marking it done waits for us, and we for it). */
@@ -213,6 +220,17 @@ export function createTimeRepo(db: Database) {
         .where(and(eq(timesheetWeeks.workshopId, workshopId), inArray(timesheetWeeks.technicianId, technicianIds)));
     },
 
+    /** Approvals of the technician's weeks among `weekStarts`. */
+    async approvalsOf(workshopId: string, technicianId: string, weekStarts: string[], q: Db = db) {
+      if (weekStarts.length === 0) return [];
+      return q
+        .select({ weekStart: timesheetWeeks.weekStart, by: { id: users.id, name: users.name }, at: timesheetWeeks.approvedAt })
+        .from(timesheetWeeks)
+        .leftJoin(users, eq(users.id, timesheetWeeks.approvedBy))
+        .where(and(eq(timesheetWeeks.workshopId, workshopId), eq(timesheetWeeks.technicianId, technicianId), inArray(timesheetWeeks.weekStart, weekStarts)))
+        .orderBy(asc(timesheetWeeks.weekStart));
+    },
+
     async lockEntry(tx: Tx, workshopId: string, id: string) {
       const [row] = await tx
         .select({ id: timeEntries.id, technicianId: timeEntries.technicianId, taskId: timeEntries.taskId, startedAt: timeEntries.startedAt, endedAt: timeEntries.endedAt })
@@ -229,7 +247,12 @@ export function createTimeRepo(db: Database) {
 
     update: (tx: Tx, id: string, values: Partial<EntryValues>) => tx.update(timeEntries).set(values).where(eq(timeEntries.id, id)),
 
-    insertCorrection: (tx: Tx, values: typeof timeEntryCorrections.$inferInsert) => tx.insert(timeEntryCorrections).values(values),
+    /**
+     * Records a correction at the database's clock: corrections of one entry are serialized by the
+     * entry's row lock, so their times strictly increase and the trail reads in the order they were made.
+     */
+    insertCorrection: (tx: Tx, values: Omit<typeof timeEntryCorrections.$inferInsert, 'at'>) =>
+      tx.insert(timeEntryCorrections).values({ ...values, at: sql`clock_timestamp()` }),
 
     async insertApproval(tx: Tx, values: { workshopId: string; technicianId: string; weekStart: string; approvedBy: string; approvedAt: Date }) {
       await tx.insert(timesheetWeeks).values(values).onConflictDoNothing();
