@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { DndContext, DragOverlay, KeyboardSensor, PointerSensor, TouchSensor, useSensor, useSensors } from '@dnd-kit/core';
+import { DndContext, DragOverlay, KeyboardSensor, TouchSensor, useSensor, useSensors } from '@dnd-kit/core';
 import type { Board, Job } from '@keybed/shared';
 import { RegionBoundary } from '@/components/region-boundary';
 import type { PreferredLengthUnit } from '@/lib/length-unit';
@@ -10,6 +10,7 @@ import { boardAnnouncements, screenReaderInstructions } from '../lib/announcemen
 import { serverIndexFor } from '../lib/apply-move';
 import { boardCollisions } from '../lib/collisions';
 import { boardKeyboardCoordinates } from '../lib/keyboard-coordinates';
+import { MouseAndPenSensor } from '../lib/mouse-and-pen-sensor';
 import { isFullFor } from '../lib/wip';
 import { DroppableStageColumn } from './droppable-stage-column';
 import { JobCard } from './job-card';
@@ -37,7 +38,7 @@ export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardPro
   const isReducedMotion = usePrefersReducedMotion();
   const [held, setHeld] = useState<{ drop: Drop; view: HeldMove } | null>(null);
   const sensors = useSensors(
-    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
+    useSensor(MouseAndPenSensor, { activationConstraint: { distance: 6 } }),
     useSensor(TouchSensor, { activationConstraint: { delay: 200, tolerance: 8 } }),
     useSensor(KeyboardSensor, { coordinateGetter: boardKeyboardCoordinates }),
   );
@@ -79,6 +80,8 @@ export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardPro
     <DndContext
       sensors={sensors}
       collisionDetection={boardCollisions(drag.columns)}
+      // Scroll the board only when a card is held close to its edge, not across a fifth of a wide screen.
+      autoScroll={{ threshold: { x: 0.08, y: 0.15 } }}
       accessibility={{ announcements, screenReaderInstructions }}
       {...drag.handlers}
     >

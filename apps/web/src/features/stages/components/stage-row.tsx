@@ -83,11 +83,11 @@ export function StageRow({ stage, place, count, onMove, isReordering }: StageRow
           <Button type="submit" size="sm" disabled={!isChanged} isPending={update.isPending && update.variables?.changes.isArchived === undefined}>
             Save<span className="sr-only"> {stage.name}</span>
           </Button>
-          <Button size="sm" variant="secondary" onClick={() => onMove(stage.id, -1)} disabled={place === 1 || isReordering}>
-            Up<span className="sr-only">: move {stage.name} earlier</span>
+          <Button size="sm" variant="secondary" aria-label={`Move ${stage.name} up`} onClick={() => onMove(stage.id, -1)} disabled={place === 1 || isReordering}>
+            Up
           </Button>
-          <Button size="sm" variant="secondary" onClick={() => onMove(stage.id, 1)} disabled={place === count || isReordering}>
-            Down<span className="sr-only">: move {stage.name} later</span>
+          <Button size="sm" variant="secondary" aria-label={`Move ${stage.name} down`} onClick={() => onMove(stage.id, 1)} disabled={place === count || isReordering}>
+            Down
           </Button>
           <Button size="sm" variant="secondary" onClick={archive} isPending={update.isPending && update.variables?.changes.isArchived === true}>
             Archive<span className="sr-only"> {stage.name}</span>
