@@ -1,12 +1,13 @@
 import { defineConfig } from 'vitest/config';
 
 /**
- * Two projects: pure unit tests, and API tests over HTTP against a real PostgreSQL
+ * Three projects: pure web-app logic, pure unit tests, and API tests over HTTP against a real PostgreSQL
  * (each API test file gets its own database cloned from a migrated template).
  */
 export default defineConfig({
   test: {
     projects: [
+      'apps/web/vitest.config.ts',
       {
         test: {
           name: 'unit',
