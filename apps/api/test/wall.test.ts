@@ -199,6 +199,19 @@ describe('PIN lockout', () => {
     expect((await securityEvents(own.workshopId)).map((e) => e.kind)).toContain('pin_unlocked');
   });
 
+  it('when the owner unlocks a locked technician, then the lock is gone and the right PIN works', async () => {
+    const own = await benchWorkshop(t);
+    await setPin(own.owner.agent, own.declan.userId, '135790');
+    const { agent } = await pairWall(t, own.owner);
+    for (let i = 0; i < 5; i++) await agent.post(`/api/wall/technicians/${own.declan.userId}/verify-pin`).send({ pin: '000000' });
+    await agent.post(`/api/wall/technicians/${own.declan.userId}/verify-pin`).send({ pin: '135790' }).expect(429);
+    const membershipId = await membershipOf(own.owner.agent, own.declan.userId);
+    expect(PinStatus.parse((await own.owner.agent.post(`/api/team/members/${membershipId}/unlock-pin`).expect(200)).body).lockedUntil).toBeNull();
+    const list = WallTechnicianList.parse((await agent.get('/api/wall/technicians').expect(200)).body).technicians;
+    expect(list.find((x) => x.id === own.declan.userId)!.lockedUntil).toBeNull();
+    await agent.post(`/api/wall/technicians/${own.declan.userId}/verify-pin`).send({ pin: '135790' }).expect(200);
+  });
+
   it('when another workshop tries to unlock our technician, then 404', async () => {
     const other = await signUpWorkshop(t, 'other');
     await other.agent.post(`/api/team/members/${await membershipOf(w.owner.agent, w.priya.userId)}/unlock-pin`).expect(404);
