@@ -73,6 +73,8 @@ export const jobs = pgTable(
     check('jobs_version_positive', sql`${t.version} >= 1`),
     index().on(t.workshopId, t.status),
     index().on(t.pianoId),
+    // The board reads only jobs on it; finished jobs pile up behind them over the years.
+    index('jobs_on_board').on(t.workshopId, t.stageId, t.position).where(sql`${t.position} is not null`),
   ],
 );
 

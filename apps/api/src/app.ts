@@ -17,6 +17,7 @@ import { createSessionStore } from './lib/sessions';
 import { createAuthRepo } from './modules/auth/auth.repo';
 import { authRouter } from './modules/auth/auth.router';
 import { createAuthService } from './modules/auth/auth.service';
+import { createBoardCache } from './modules/board/board-cache';
 import { createBoardRepo } from './modules/board/board.repo';
 import { boardRouter } from './modules/board/board.router';
 import { createBoardService } from './modules/board/board.service';
@@ -46,6 +47,8 @@ export interface AppDeps {
   mailer: Mailer;
   logger: Logger;
   now?: () => Date;
+  /** Keep each workshop's unfiltered board between changes (default on; the benchmark compares both). */
+  cacheBoards?: boolean;
 }
 
 /**
@@ -54,8 +57,10 @@ export interface AppDeps {
  * streams and stops listening (call it before closing the server and the pool); `liveStreamCount()`
  * says how many event streams this process is serving.
  */
-export function createApp({ config, db, sql, mailer, logger, now = () => new Date() }: AppDeps) {
-  const live = createLiveEvents({ sql, logger });
+export function createApp({ config, db, sql, mailer, logger, now = () => new Date(), cacheBoards = true }: AppDeps) {
+  const boardCache = createBoardCache();
+  const live = createLiveEvents({ sql, logger, onChange: boardCache.invalidate, onListen: cacheBoards ? boardCache.reset : undefined });
+  const changed = boardCache.invalidate;
   const app = Object.assign(express(), { close: () => live.close(), liveStreamCount: () => live.subscriberCount() });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
@@ -64,13 +69,13 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   const authRepo = createAuthRepo(db);
   const auth = createAuthService({ repo: authRepo, sessions, mailer, appOrigin: config.appOrigin, now });
   const team = createTeamService({ repo: createTeamRepo(db), sessions, mailer, appOrigin: config.appOrigin, now });
-  const pianos = createPianosService({ repo: createPianosRepo(db), now });
-  const clients = createClientsService({ repo: createClientsRepo(db), pianos, now });
-  const stages = createStagesService({ repo: createStagesRepo(db), now });
+  const pianos = createPianosService({ repo: createPianosRepo(db), now, changed });
+  const clients = createClientsService({ repo: createClientsRepo(db), pianos, now, changed });
+  const stages = createStagesService({ repo: createStagesRepo(db), now, changed });
   const technicians = createTechnicianLookup(db);
-  const jobs = createJobsService({ repo: createJobsRepo(db), technicians, now });
-  const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians });
-  const bench = createBench({ db, live, sessions, logger, limits: config.limits, now });
+  const jobs = createJobsService({ repo: createJobsRepo(db), technicians, now, changed });
+  const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians, cache: boardCache });
+  const bench = createBench({ db, live, sessions, logger, limits: config.limits, now, changed });
 
   app.use(
     pinoHttp({

@@ -1,5 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Board } from '@keybed/shared';
+import { createApp } from '../src/app';
+import { createLogger } from '../src/lib/logger';
+import { createSmtpMailer } from '../src/lib/mail';
+import supertestRequest from 'supertest';
 import type supertest from 'supertest';
 import { activeStages, createClient, createJob, createPiano, fillStage } from './board-fixtures';
 import { addMember, createTestApp, signUpWorkshop, type TestApp } from './helpers';
@@ -120,4 +124,64 @@ describe('GET /api/board', () => {
     expect(withFortyTwo).toBe(withTwo);
     expect(withTwo).toBeLessThanOrEqual(6);
   });
+
+  it('when the board is read again with nothing changed, then only the session is checked, the bytes are the same, and a conditional read gets 304', async () => {
+    const { agent } = await signUpWorkshop(t);
+    await fillStage(agent, (await activeStages(agent))[0]!.id, 3);
+    statements = [];
+    const first = await agent.get('/api/board').expect(200);
+    const cold = statements.length;
+    statements = [];
+    const second = await agent.get('/api/board').expect(200);
+    expect(statements.length).toBeLessThan(cold);
+    expect(statements.some((q) => /from "jobs"/i.test(q))).toBe(false);
+    expect(second.text).toBe(first.text);
+    expect(second.headers.etag).toBe(first.headers.etag);
+    expect(second.headers['cache-control']).toBe('no-cache');
+    await agent.get('/api/board').set('If-None-Match', first.headers.etag!).expect(304);
+  });
+
+  it('when a job, stage, client or piano changes, then the very next board read shows it', async () => {
+    const { agent } = await signUpWorkshop(t);
+    const [intake, stripDown] = await activeStages(agent);
+    const job = await createJob(agent, { stageId: intake!.id });
+    const card = async () => {
+      const board = await boardOf(agent);
+      const stage = board.stages.find((s) => s.jobs.some((j) => j.id === job.id))!;
+      return { stage: stage.name, job: stage.jobs.find((j) => j.id === job.id)! };
+    };
+    await card();
+    await agent.patch(`/api/jobs/${job.id}`).send({ version: 1, title: 'Hammers and rebush' }).expect(200);
+    expect((await card()).job.title).toBe('Hammers and rebush');
+    await agent.post(`/api/jobs/${job.id}/move`).send({ stageId: stripDown!.id, index: 0, version: 2 }).expect(200);
+    expect((await card()).stage).toBe('Strip-down');
+    await agent.patch(`/api/stages/${stripDown!.id}`).send({ name: 'Dismantling' }).expect(200);
+    expect((await card()).stage).toBe('Dismantling');
+    await agent.patch(`/api/clients/${job.client.id}`).send({ name: 'Harriet Pembleton-Shaw' }).expect(200);
+    expect((await card()).job.client.name).toBe('Harriet Pembleton-Shaw');
+    await agent.patch(`/api/pianos/${job.piano.id}`).send({ sizeMm: 1780 }).expect(200);
+    expect((await card()).job.piano.sizeMm).toBe(1780);
+    await createJob(agent, { stageId: stripDown!.id });
+    expect((await boardOf(agent)).stages[1]!.jobCount).toBe(2);
+    await agent.post('/api/stages').send({ name: 'Voicing' }).expect(201);
+    expect((await boardOf(agent)).stages.at(-1)!.name).toBe('Voicing');
+  });
+
+  it('when boards are kept between changes or built every time, then both answer the same board', async () => {
+    const { agent, cookie } = await signUpWorkshop(t);
+    const stages = await activeStages(agent);
+    await fillStage(agent, stages[0]!.id, 3);
+    await fillStage(agent, stages[3]!.id, 2);
+    const mailer = createSmtpMailer(t.config.smtp);
+    const uncached = createApp({ config: t.config, db: t.db, sql: t.sql, mailer, logger: createLogger('silent'), cacheBoards: false });
+    try {
+      const kept = [(await agent.get('/api/board').expect(200)).text, (await agent.get('/api/board').expect(200)).text];
+      const built = (await supertestRequest(uncached).get('/api/board').set('Cookie', cookie).expect(200)).text;
+      expect(kept).toEqual([built, built]);
+    } finally {
+      await uncached.close();
+      mailer.close();
+    }
+  });
 });
+

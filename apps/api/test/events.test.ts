@@ -1,6 +1,7 @@
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Board } from '@keybed/shared';
 import { createDatabase } from '@keybed/db/client';
 import { createApp } from '../src/app';
 import { createLiveEvents, notifyLive, type LiveSink } from '../src/lib/live-events';
@@ -133,6 +134,24 @@ describe('GET /api/events', () => {
     } finally {
       onA.close();
       onB.close();
+    }
+  });
+
+  it('when a job is moved through process A, then process B’s board shows the move by the time B’s stream hears of it', async () => {
+    const { agent, cookie } = await signUpWorkshop(t);
+    const [intake, stripDown] = await activeStages(agent);
+    const job = await createJob(agent, { stageId: intake!.id });
+    const boardOnB = async () => Board.parse((await send(serverB.url, cookie, 'GET', '/api/board')).body);
+    const stageOnB = async () => (await boardOnB()).stages.find((s) => s.jobs.some((j) => j.id === job.id))!.id;
+    expect(await stageOnB()).toBe(intake!.id);
+    expect(await stageOnB()).toBe(intake!.id);
+    const stream = await openEventStream(`${serverB.url}/api/events`, cookie);
+    try {
+      await send(serverA.url, cookie, 'POST', `/api/jobs/${job.id}/move`, { stageId: stripDown!.id, index: 0, version: 1 });
+      expect(await stream.nextEvent(1000)).toMatchObject({ kind: 'job.moved', id: job.id });
+      expect(await stageOnB()).toBe(stripDown!.id);
+    } finally {
+      stream.close();
     }
   });
 

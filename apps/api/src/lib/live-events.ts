@@ -24,17 +24,37 @@ export async function notifyLive(tx: Tx, workshopId: string, kind: LiveEventKind
   await tx.execute(drizzleSql`select pg_notify(${LIVE_CHANNEL}, ${payload})`);
 }
 
+/** Called with a workshop's id once a change to it has committed in this process. */
+export type Changed = (workshopId: string) => void;
+
+/** Awaits a write transaction, then reports the workshop as changed (only if it committed). */
+export async function committed<T>(changed: Changed, workshopId: string, write: Promise<T>): Promise<T> {
+  const result = await write;
+  changed(workshopId);
+  return result;
+}
+
 /** Where a subscriber's frames go: an SSE response in practice. */
 export interface LiveSink {
   write(chunk: string): unknown;
   end(): unknown;
 }
 
+interface Options {
+  sql: Sql;
+  logger: Logger;
+  heartbeatMs?: number;
+  /** Told of every workshop that changed, in any process, before its streams hear of it. */
+  onChange?: (workshopId: string) => void;
+  /** Told each time the listener starts listening: at start and after every reconnect. */
+  onListen?: () => void;
+}
+
 /**
  * One LISTEN connection per process (postgres.js keeps it apart from the pool and re-listens after
  * a reconnect) fanning events out to this process's SSE subscribers of the matching workshop.
  */
-export function createLiveEvents({ sql, logger, heartbeatMs = HEARTBEAT_MS }: { sql: Sql; logger: Logger; heartbeatMs?: number }) {
+export function createLiveEvents({ sql, logger, heartbeatMs = HEARTBEAT_MS, onChange, onListen }: Options) {
   const byWorkshop = new Map<string, Set<LiveSink>>();
   let isClosed = false;
 
@@ -45,11 +65,12 @@ export function createLiveEvents({ sql, logger, heartbeatMs = HEARTBEAT_MS }: { 
       return;
     }
     const { workshopId, ...event } = parsed.data;
+    onChange?.(workshopId);
     const frame = `data: ${JSON.stringify(event satisfies LiveEvent)}\n\n`;
     for (const sink of byWorkshop.get(workshopId) ?? []) sink.write(frame);
   }
 
-  const listening = sql.listen(LIVE_CHANNEL, deliver);
+  const listening = sql.listen(LIVE_CHANNEL, deliver, onListen);
   listening.catch((err: unknown) => logger.error({ err }, 'could not listen for live events'));
 
   const heartbeat = setInterval(() => {

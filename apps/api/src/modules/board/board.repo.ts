@@ -1,7 +1,7 @@
-import { and, asc, count, eq, inArray, isNotNull, isNull } from 'drizzle-orm';
+import { and, asc, count, eq, isNotNull, isNull } from 'drizzle-orm';
 import type { Database } from '@keybed/db/client';
 import { jobs, stages } from '@keybed/db/schema';
-import { ON_BOARD_STATUSES, type BoardQuery } from '@keybed/shared';
+import type { BoardQuery } from '@keybed/shared';
 import { jobSearch, selectJobs } from '../jobs/jobs.repo';
 import type { TechnicianLookup } from '../jobs/technicians';
 
@@ -13,7 +13,8 @@ export function createBoardRepo(db: Database, technicians: TechnicianLookup) {
       db
         .select({ id: stages.id, name: stages.name, position: stages.position, wipLimit: stages.wipLimit, jobCount: count(jobs.id) })
         .from(stages)
-        .leftJoin(jobs, and(eq(jobs.stageId, stages.id), inArray(jobs.status, ON_BOARD_STATUSES)))
+        // Jobs on the board are exactly those with a position (a CHECK ties position to status).
+        .leftJoin(jobs, and(eq(jobs.workshopId, stages.workshopId), eq(jobs.stageId, stages.id), isNotNull(jobs.position)))
         .where(and(eq(stages.workshopId, workshopId), isNull(stages.archivedAt)))
         .groupBy(stages.id)
         .orderBy(asc(stages.position)),

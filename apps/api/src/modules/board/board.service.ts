@@ -1,18 +1,31 @@
-import type { Board, BoardQuery, Job } from '@keybed/shared';
+import type { BoardQuery, Job } from '@keybed/shared';
 import { toJob } from '../jobs/job-view';
 import type { TechnicianLookup } from '../jobs/technicians';
+import { toBoardBody, type BoardBody, type BoardCache } from './board-cache';
 import type { BoardRepo } from './board.repo';
 
-export function createBoardService({ repo, technicians }: { repo: BoardRepo; technicians: TechnicianLookup }) {
+interface Deps {
+  repo: BoardRepo;
+  technicians: TechnicianLookup;
+  cache: BoardCache;
+}
+
+const isFiltered = (query: BoardQuery) => query.q !== undefined || query.blocked !== undefined || query.technicianId !== undefined;
+
+export function createBoardService({ repo, technicians, cache }: Deps) {
+  /** Active stages in order with their jobs in position order; archived stages' jobs are not shown. */
+  async function build(workshopId: string, query: BoardQuery): Promise<BoardBody> {
+    const [stages, rows] = await Promise.all([repo.activeStages(workshopId), repo.jobsOnBoard(workshopId, query)]);
+    const byJob = await technicians.forJobs(rows.map((r) => r.id));
+    const jobsByStage = new Map<string, Job[]>(stages.map((s) => [s.id, []]));
+    for (const row of rows) jobsByStage.get(row.stageId)?.push(toJob(row, byJob.get(row.id)));
+    return toBoardBody({ stages: stages.map((s) => ({ ...s, jobs: jobsByStage.get(s.id)! })) });
+  }
+
   return {
-    /** Active stages in order with their jobs in position order; archived stages' jobs are not shown. */
-    async get(workshopId: string, query: BoardQuery): Promise<Board> {
-      const [stages, rows] = await Promise.all([repo.activeStages(workshopId), repo.jobsOnBoard(workshopId, query)]);
-      const byJob = await technicians.forJobs(rows.map((r) => r.id));
-      const jobsByStage = new Map<string, Job[]>(stages.map((s) => [s.id, []]));
-      for (const row of rows) jobsByStage.get(row.stageId)?.push(toJob(row, byJob.get(row.id)));
-      return { stages: stages.map((s) => ({ ...s, jobs: jobsByStage.get(s.id)! })) };
-    },
+    /** The board as JSON bytes (the `Board` contract); the unfiltered board comes from the cache when it can. */
+    get: (workshopId: string, query: BoardQuery): Promise<BoardBody> =>
+      isFiltered(query) ? build(workshopId, query) : cache.get(workshopId, () => build(workshopId, query)),
   };
 }
 

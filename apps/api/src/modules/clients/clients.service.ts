@@ -1,6 +1,6 @@
 import type { Client, ClientDetail, ClientListQuery, CreateClientInput, UpdateClientInput } from '@keybed/shared';
 import { notFound } from '../../http/errors';
-import { notifyLive } from '../../lib/live-events';
+import { committed, notifyLive, type Changed } from '../../lib/live-events';
 import type { PianosService } from '../pianos/pianos.service';
 import type { ClientRow, ClientsRepo } from './clients.repo';
 
@@ -8,6 +8,7 @@ interface Deps {
   repo: ClientsRepo;
   pianos: Pick<PianosService, 'list'>;
   now: () => Date;
+  changed: Changed;
 }
 
 export const toClient = (c: ClientRow): Client => ({
@@ -21,7 +22,7 @@ export const toClient = (c: ClientRow): Client => ({
   updatedAt: c.updatedAt.toISOString(),
 });
 
-export function createClientsService({ repo, pianos, now }: Deps) {
+export function createClientsService({ repo, pianos, now, changed }: Deps) {
   return {
     list: async (workshopId: string, query: ClientListQuery) => (await repo.list(workshopId, query)).map(toClient),
 
@@ -32,21 +33,28 @@ export function createClientsService({ repo, pianos, now }: Deps) {
     },
 
     create: (workshopId: string, input: CreateClientInput) =>
-      repo.transaction(async (tx) => {
-        const at = now();
-        const row = await repo.insert(tx, workshopId, { ...input, notes: input.notes ?? '' });
-        await notifyLive(tx, workshopId, 'client.changed', row.id, at);
-        return toClient(row);
-      }),
+      committed(
+        changed,
+        workshopId,
+        repo.transaction(async (tx) => {
+          const row = await repo.insert(tx, workshopId, { ...input, notes: input.notes ?? '' });
+          await notifyLive(tx, workshopId, 'client.changed', row.id, now());
+          return toClient(row);
+        }),
+      ),
 
     update: (workshopId: string, id: string, input: UpdateClientInput) =>
-      repo.transaction(async (tx) => {
-        const at = now();
-        const row = await repo.update(tx, workshopId, id, input, at);
-        if (!row) throw notFound('That client');
-        await notifyLive(tx, workshopId, 'client.changed', row.id, at);
-        return toClient(row);
-      }),
+      committed(
+        changed,
+        workshopId,
+        repo.transaction(async (tx) => {
+          const at = now();
+          const row = await repo.update(tx, workshopId, id, input, at);
+          if (!row) throw notFound('That client');
+          await notifyLive(tx, workshopId, 'client.changed', row.id, at);
+          return toClient(row);
+        }),
+      ),
   };
 }
 

@@ -1,7 +1,7 @@
-import { isOnBoard, type CreateJobInput, type JobDetail, type JobListQuery, type MoveJobInput, type UpdateJobInput } from '@keybed/shared';
+import { isOnBoard, type CreateJobInput, type Job, type JobDetail, type JobListQuery, type MoveJobInput, type UpdateJobInput } from '@keybed/shared';
 import type { AuthContext } from '../../http/context';
 import { AppError, notFound } from '../../http/errors';
-import { notifyLive } from '../../lib/live-events';
+import { committed, notifyLive, type Changed } from '../../lib/live-events';
 import type { Tx } from '../auth/auth.repo';
 import { toJob } from './job-view';
 import type { JobsRepo } from './jobs.repo';
@@ -11,22 +11,40 @@ interface Deps {
   repo: JobsRepo;
   technicians: TechnicianLookup;
   now: () => Date;
+  changed: Changed;
 }
 
 const jobNotFound = () => notFound('That job');
+
+/** Rolls a write back because the job changed since the caller read it; answered as a 409 with the job as it is now. */
+class StaleVersion extends Error {
+  constructor(readonly jobId: string) {
+    super('stale version');
+  }
+}
 const stageField = (message: string) => new AppError('validation_failed', 400, message, { stageId: [message] });
 
-export function createJobsService({ repo, technicians, now }: Deps) {
-  async function current(tx: Tx, workshopId: string, id: string) {
-    const row = (await repo.find(workshopId, id, tx))!;
-    return toJob(row, (await technicians.forJobs([id])).get(id));
+export function createJobsService({ repo, technicians, now, changed }: Deps) {
+  async function load(workshopId: string, id: string): Promise<Job> {
+    const [row, byJob] = await Promise.all([repo.find(workshopId, id), technicians.forJobs([id])]);
+    if (!row) throw jobNotFound();
+    return toJob(row, byJob.get(id));
   }
 
-  /** 409 with the job as it is now, so the client can show what changed. */
-  async function versionConflict(tx: Tx, workshopId: string, id: string) {
-    return new AppError('version_conflict', 409, 'Someone changed this job since you loaded it. Check its current state and try again.', undefined, {
-      current: await current(tx, workshopId, id),
-    });
+  /**
+   * Runs a write transaction that answers the job's id, then reads the job once committed (outside
+   * the transaction, so no transaction waits on a second pooled connection). A stale version
+   * rolls back and answers 409 with the job as it is now, so the client can show what changed.
+   */
+  async function writeJob(workshopId: string, fn: (tx: Tx) => Promise<string>): Promise<Job> {
+    try {
+      return await load(workshopId, await committed(changed, workshopId, repo.transaction(fn)));
+    } catch (err) {
+      if (!(err instanceof StaleVersion)) throw err;
+      throw new AppError('version_conflict', 409, 'Someone changed this job since you loaded it. Check its current state and try again.', undefined, {
+        current: await load(workshopId, err.jobId),
+      });
+    }
   }
 
   /** Unknown stage: 400 on `stageId`; another workshop's: 404. */
@@ -43,7 +61,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
     const stageIds = [...new Set([seen.stageId, extraStageId ?? seen.stageId])];
     const stages = await repo.lockStages(tx, workshopId, stageIds);
     const job = (await repo.lock(tx, workshopId, id))!;
-    if (job.version !== version || job.stageId !== seen.stageId) throw await versionConflict(tx, workshopId, id);
+    if (job.version !== version || job.stageId !== seen.stageId) throw new StaleVersion(id);
     return { job, stages, stageIds };
   }
 
@@ -73,7 +91,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
 
     /** A new job for a piano of the workshop, at the end of the given stage (or of the first one). */
     create: (auth: AuthContext, input: CreateJobInput) =>
-      repo.transaction(async (tx) => {
+      writeJob(auth.workshopId, async (tx) => {
         const { workshopId } = auth;
         const clientId = await repo.findPianoClient(tx, workshopId, input.pianoId);
         if (!clientId) throw notFound('That piano');
@@ -97,7 +115,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
         });
         await repo.recordStageChange(tx, { workshopId, jobId: id, fromStageId: null, toStageId: stage.id, byUserId: auth.userId, at });
         await notifyLive(tx, workshopId, 'job.created', id, at);
-        return current(tx, workshopId, id);
+        return id;
       }),
 
     /**
@@ -105,7 +123,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
      * closes the gap in its stage; active or on hold again puts it at the end of its stage.
      */
     update: (workshopId: string, id: string, input: UpdateJobInput) =>
-      repo.transaction(async (tx) => {
+      writeJob(workshopId, async (tx) => {
         const { job, stages } = await lockJob(tx, workshopId, id, input.version);
         const { version: _version, ...changes } = input;
         const status = input.status ?? job.status;
@@ -127,7 +145,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
         await repo.bump(tx, id, { ...changes, isBlocked, blockedReason, position }, at);
         if (wasOnBoard && !willBeOnBoard) await repo.renumberStage(tx, job.stageId);
         await notifyLive(tx, workshopId, 'job.updated', id, at);
-        return current(tx, workshopId, id);
+        return id;
       }),
 
     /**
@@ -135,7 +153,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
      * both stages then the job, renumbers both stages without gaps, records a stage change.
      */
     move: (auth: AuthContext, id: string, input: MoveJobInput) =>
-      repo.transaction(async (tx) => {
+      writeJob(auth.workshopId, async (tx) => {
         const { workshopId } = auth;
         await checkStageIsOurs(tx, workshopId, input.stageId);
         const { job, stages, stageIds } = await lockJob(tx, workshopId, id, input.version, input.stageId);
@@ -149,7 +167,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
           const message = `Index must be between 0 and ${others} for ${target.name}`;
           throw new AppError('validation_failed', 400, message, { index: [message] });
         }
-        if (job.stageId === target.id && job.position === input.index) return current(tx, workshopId, id);
+        if (job.stageId === target.id && job.position === input.index) return id;
         const at = now();
         await repo.makeRoom(tx, { jobId: id, stageIds, target: target.id, index: input.index });
         await repo.bump(tx, id, { stageId: target.id, position: input.index }, at);
@@ -157,7 +175,7 @@ export function createJobsService({ repo, technicians, now }: Deps) {
           await repo.recordStageChange(tx, { workshopId, jobId: id, fromStageId: job.stageId, toStageId: target.id, byUserId: auth.userId, at });
         }
         await notifyLive(tx, workshopId, 'job.moved', id, at);
-        return current(tx, workshopId, id);
+        return id;
       }),
   };
 }

@@ -1,11 +1,12 @@
 import type { CreatePianoInput, Piano, PianoDetail, PianoListQuery, UpdatePianoInput } from '@keybed/shared';
 import { notFound } from '../../http/errors';
-import { notifyLive } from '../../lib/live-events';
+import { committed, notifyLive, type Changed } from '../../lib/live-events';
 import type { PianoRow, PianosRepo } from './pianos.repo';
 
 interface Deps {
   repo: PianosRepo;
   now: () => Date;
+  changed: Changed;
 }
 
 export const toPiano = (p: PianoRow): Piano => ({
@@ -27,7 +28,7 @@ export const toPiano = (p: PianoRow): Piano => ({
 
 const clientNotFound = () => notFound('That client');
 
-export function createPianosService({ repo, now }: Deps) {
+export function createPianosService({ repo, now, changed }: Deps) {
   return {
     list: async (workshopId: string, query: Pick<PianoListQuery, 'q' | 'clientId' | 'limit'>) =>
       (await repo.list(workshopId, query)).map(toPiano),
@@ -44,21 +45,29 @@ export function createPianosService({ repo, now }: Deps) {
 
     /** The owner must be a client of the same workshop; another workshop's client answers 404. */
     create: (workshopId: string, input: CreatePianoInput) =>
-      repo.transaction(async (tx) => {
-        if (!(await repo.clientExists(tx, workshopId, input.clientId))) throw clientNotFound();
-        const id = await repo.insert(tx, workshopId, input);
-        await notifyLive(tx, workshopId, 'piano.changed', id, now());
-        return toPiano((await repo.find(workshopId, id, tx))!);
-      }),
+      committed(
+        changed,
+        workshopId,
+        repo.transaction(async (tx) => {
+          if (!(await repo.clientExists(tx, workshopId, input.clientId))) throw clientNotFound();
+          const id = await repo.insert(tx, workshopId, input);
+          await notifyLive(tx, workshopId, 'piano.changed', id, now());
+          return toPiano((await repo.find(workshopId, id, tx))!);
+        }),
+      ),
 
     update: (workshopId: string, id: string, input: UpdatePianoInput) =>
-      repo.transaction(async (tx) => {
-        if (input.clientId && !(await repo.clientExists(tx, workshopId, input.clientId))) throw clientNotFound();
-        const at = now();
-        if (!(await repo.update(tx, workshopId, id, input, at))) throw notFound('That piano');
-        await notifyLive(tx, workshopId, 'piano.changed', id, at);
-        return toPiano((await repo.find(workshopId, id, tx))!);
-      }),
+      committed(
+        changed,
+        workshopId,
+        repo.transaction(async (tx) => {
+          if (input.clientId && !(await repo.clientExists(tx, workshopId, input.clientId))) throw clientNotFound();
+          const at = now();
+          if (!(await repo.update(tx, workshopId, id, input, at))) throw notFound('That piano');
+          await notifyLive(tx, workshopId, 'piano.changed', id, at);
+          return toPiano((await repo.find(workshopId, id, tx))!);
+        }),
+      ),
   };
 }
 

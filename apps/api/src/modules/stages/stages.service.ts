@@ -1,12 +1,13 @@
 import type { CreateStageInput, ReorderStagesInput, Stage, UpdateStageInput } from '@keybed/shared';
 import { AppError, notFound } from '../../http/errors';
-import { notifyLive } from '../../lib/live-events';
+import { committed, notifyLive, type Changed } from '../../lib/live-events';
 import type { Tx } from '../auth/auth.repo';
 import type { StagesRepo } from './stages.repo';
 
 interface Deps {
   repo: StagesRepo;
   now: () => Date;
+  changed: Changed;
 }
 
 type StageRow = Awaited<ReturnType<StagesRepo['listWithCounts']>>[number];
@@ -22,7 +23,8 @@ const toStage = (s: StageRow): Stage => ({
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
-export function createStagesService({ repo, now }: Deps) {
+export function createStagesService({ repo, now, changed }: Deps) {
+  const write = <T>(workshopId: string, fn: (tx: Tx) => Promise<T>) => committed(changed, workshopId, repo.transaction(fn));
   const listIn = async (workshopId: string, q?: Tx) => (await repo.listWithCounts(workshopId, q)).map(toStage);
   const findIn = async (tx: Tx, workshopId: string, id: string) => (await listIn(workshopId, tx)).find((s) => s.id === id)!;
 
@@ -43,7 +45,7 @@ export function createStagesService({ repo, now }: Deps) {
     list: (workshopId: string) => listIn(workshopId),
 
     create: (workshopId: string, input: CreateStageInput) =>
-      repo.transaction(async (tx) => {
+      write(workshopId, async (tx) => {
         const all = await repo.lockAll(tx, workshopId);
         const id = await repo.insert(tx, workshopId, { name: input.name, wipLimit: input.wipLimit ?? null }, all.length);
         await repo.renumber(tx, workshopId, id);
@@ -53,7 +55,7 @@ export function createStagesService({ repo, now }: Deps) {
 
     /** Rename, set the WIP limit, archive (empty stages only) or restore (to the end of the board). */
     update: (workshopId: string, id: string, input: UpdateStageInput) =>
-      repo.transaction(async (tx) => {
+      write(workshopId, async (tx) => {
         const all = await repo.lockAll(tx, workshopId);
         const stage = all.find((s) => s.id === id);
         if (!stage) throw notFound('That stage');
@@ -74,7 +76,7 @@ export function createStagesService({ repo, now }: Deps) {
 
     /** The new order must list exactly the active stages; positions change in one transaction. */
     reorder: (workshopId: string, { stageIds }: ReorderStagesInput) =>
-      repo.transaction(async (tx) => {
+      write(workshopId, async (tx) => {
         const active = (await repo.lockAll(tx, workshopId)).filter((s) => s.archivedAt === null);
         const activeIds = new Set(active.map((s) => s.id));
         if (stageIds.length !== activeIds.size || stageIds.some((sid) => !activeIds.has(sid))) {

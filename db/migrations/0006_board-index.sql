@@ -1,0 +1,1 @@
+CREATE INDEX "jobs_on_board" ON "jobs" USING btree ("workshop_id","stage_id","position") WHERE "jobs"."position" is not null;
