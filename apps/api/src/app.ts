@@ -24,6 +24,7 @@ import { createBoardService } from './modules/board/board.service';
 import { createClientsRepo } from './modules/clients/clients.repo';
 import { clientsRouter } from './modules/clients/clients.router';
 import { createClientsService } from './modules/clients/clients.service';
+import { createEventsRepo } from './modules/events/events.repo';
 import { eventsRouter } from './modules/events/events.router';
 import { healthRouter } from './modules/health/health.router';
 import { createJobsRepo } from './modules/jobs/jobs.repo';
@@ -107,7 +108,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   api.use(stagesRouter(stages));
   api.use(jobsRouter(jobs));
   api.use(boardRouter(board));
-  api.use(eventsRouter(live));
+  api.use(eventsRouter(live, createEventsRepo(db), now));
   api.use(bench.router);
   api.use(apiNotFound);
   app.use('/api', api);

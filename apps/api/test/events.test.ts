@@ -6,6 +6,7 @@ import { createDatabase } from '@keybed/db/client';
 import { createApp } from '../src/app';
 import { createLiveEvents, notifyLive, type LiveSink } from '../src/lib/live-events';
 import { createLogger } from '../src/lib/logger';
+import { createEventsRepo } from '../src/modules/events/events.repo';
 import { createSmtpMailer } from '../src/lib/mail';
 import { activeStages, createClient, createJob } from './board-fixtures';
 import { addMember, createTestApp, signUpWorkshop, type TestApp } from './helpers';
@@ -212,6 +213,33 @@ describe('live events hub', () => {
       expect(frames.a).toContain('data: {"kind":"job.updated","id":"job-1","at":"2026-12-01T09:00:00.000Z"}\n\n');
       expect(frames.a[0]).toBe('retry: 3000\n\n');
       expect(frames.b.some((f) => f.startsWith('data:'))).toBe(false);
+    } finally {
+      await hub.close();
+    }
+  });
+
+  it('when the member signs out or is deactivated, then their stream ends at the next heartbeat; others stay open', async () => {
+    const { agent: owner, cookie, me } = await signUpWorkshop(t);
+    const tech = await addMember(t, owner, 'technician');
+    const techCookie = await signInCookie(tech.email);
+    const repo = createEventsRepo(t.db);
+    const hub = createLiveEvents({ sql: t.sql, logger: createLogger('silent'), heartbeatMs: 20 });
+    const ended = { owner: false, tech: false };
+    const sink = (who: keyof typeof ended): LiveSink => ({ write: () => undefined, end: () => (ended[who] = true) });
+    const sessionOf = (c: string) => c.slice('keybed_session='.length);
+    try {
+      await hub.ready();
+      hub.subscribe(me.workshop.id, sink('owner'), { isStillAllowed: () => repo.isSessionLive(sessionOf(cookie), new Date()) });
+      hub.subscribe(me.workshop.id, sink('tech'), { isStillAllowed: () => repo.isSessionLive(sessionOf(techCookie), new Date()) });
+      const members = await owner.get('/api/team/members').expect(200);
+      const techId = members.body.members.find((m: { email: string }) => m.email === tech.email).id;
+      await owner.patch(`/api/team/members/${techId}`).send({ isActive: false }).expect(200);
+      await waitUntil(() => ended.tech);
+      expect(ended.owner).toBe(false);
+      expect(hub.subscriberCount()).toBe(1);
+      await fetch(`${serverA.url}/api/auth/sign-out`, { method: 'POST', headers: { cookie } });
+      await waitUntil(() => ended.owner);
+      expect(hub.subscriberCount()).toBe(0);
     } finally {
       await hub.close();
     }

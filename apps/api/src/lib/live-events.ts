@@ -56,7 +56,23 @@ interface Options {
  */
 export function createLiveEvents({ sql, logger, heartbeatMs = HEARTBEAT_MS, onChange, onListen }: Options) {
   const byWorkshop = new Map<string, Set<LiveSink>>();
+  const checks = new Map<LiveSink, () => Promise<boolean>>();
   let isClosed = false;
+
+  function remove(workshopId: string, sink: LiveSink) {
+    checks.delete(sink);
+    const sinks = byWorkshop.get(workshopId);
+    sinks?.delete(sink);
+    if (sinks?.size === 0) byWorkshop.delete(workshopId);
+  }
+
+  /** Ends a stream whose caller may no longer listen (signed out, deactivated); a failed check keeps it. */
+  async function recheck(workshopId: string, sink: LiveSink, isStillAllowed: () => Promise<boolean>) {
+    const isAllowed = await isStillAllowed().catch(() => true);
+    if (isAllowed || !byWorkshop.get(workshopId)?.has(sink)) return;
+    remove(workshopId, sink);
+    sink.end();
+  }
 
   function deliver(raw: string) {
     const parsed = Notice.safeParse(safeJson(raw));
@@ -74,7 +90,13 @@ export function createLiveEvents({ sql, logger, heartbeatMs = HEARTBEAT_MS, onCh
   listening.catch((err: unknown) => logger.error({ err }, 'could not listen for live events'));
 
   const heartbeat = setInterval(() => {
-    for (const sinks of byWorkshop.values()) for (const sink of sinks) sink.write(': heartbeat\n\n');
+    for (const [workshopId, sinks] of byWorkshop) {
+      for (const sink of sinks) {
+        sink.write(': heartbeat\n\n');
+        const check = checks.get(sink);
+        if (check) void recheck(workshopId, sink, check);
+      }
+    }
   }, heartbeatMs);
   heartbeat.unref();
 
@@ -84,17 +106,18 @@ export function createLiveEvents({ sql, logger, heartbeatMs = HEARTBEAT_MS, onCh
       await listening;
     },
 
-    /** Starts a stream for one member's workshop; returns the function that ends it. */
-    subscribe(workshopId: string, sink: LiveSink) {
+    /**
+     * Starts a stream for one workshop; returns the function that ends it. `isStillAllowed`, when
+     * given, is asked at each heartbeat and ends the stream once it answers false.
+     */
+    subscribe(workshopId: string, sink: LiveSink, options: { isStillAllowed?: () => Promise<boolean> } = {}) {
       if (isClosed) throw new Error('live events are closed');
       sink.write(`retry: ${RETRY_MS}\n\n`);
       let sinks = byWorkshop.get(workshopId);
       if (!sinks) byWorkshop.set(workshopId, (sinks = new Set()));
       sinks.add(sink);
-      return () => {
-        sinks.delete(sink);
-        if (sinks.size === 0 && byWorkshop.get(workshopId) === sinks) byWorkshop.delete(workshopId);
-      };
+      if (options.isStillAllowed) checks.set(sink, options.isStillAllowed);
+      return () => remove(workshopId, sink);
     },
 
     subscriberCount: () => [...byWorkshop.values()].reduce((n, s) => n + s.size, 0),
@@ -106,6 +129,7 @@ export function createLiveEvents({ sql, logger, heartbeatMs = HEARTBEAT_MS, onCh
       clearInterval(heartbeat);
       for (const sinks of byWorkshop.values()) for (const sink of sinks) sink.end();
       byWorkshop.clear();
+      checks.clear();
       const meta = await listening.catch(() => undefined);
       await meta?.unlisten().catch(() => undefined);
     },
