@@ -12,3 +12,5 @@ export * from './schemas/settings';
 export * from './schemas/parts';
 export * from './schemas/estimates';
 export * from './schemas/costing';
+export * from './schemas/surveys';
+export * from './schemas/survey-defaults';
