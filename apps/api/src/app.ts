@@ -40,6 +40,7 @@ import { createStagesService } from './modules/stages/stages.service';
 import { createTeamRepo } from './modules/team/team.repo';
 import { teamRouter } from './modules/team/team.router';
 import { createTeamService } from './modules/team/team.service';
+import { createMoney } from './money';
 
 export interface AppDeps {
   config: Config;
@@ -77,6 +78,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   const jobs = createJobsService({ repo: createJobsRepo(db), technicians, now, changed });
   const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians, cache: boardCache });
   const bench = createBench({ db, live, sessions, logger, limits: config.limits, now, changed });
+  const money = createMoney({ db, logger, limits: config.limits, now, changed });
 
   app.use(
     pinoHttp({
@@ -110,6 +112,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   api.use(boardRouter(board));
   api.use(eventsRouter(live, createEventsRepo(db), now));
   api.use(bench.router);
+  api.use(money.router);
   api.use(apiNotFound);
   app.use('/api', api);
 
