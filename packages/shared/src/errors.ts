@@ -35,6 +35,12 @@ export const ERROR_CODES = [
   'insufficient_stock',
   /** Estimates: the estimate's status does not allow that (editing an issued one, accepting a draft). */
   'estimate_status',
+  /** Uploads: the content is not a photo Keybed can read (JPEG, PNG, WebP), whatever its name says. */
+  'unsupported_file',
+  /** The client's link: past its expiry, withdrawn by the workshop, or for a revision replaced by a newer one. */
+  'link_expired',
+  'link_revoked',
+  'link_superseded',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -14,3 +14,7 @@ export * from './schemas/estimates';
 export * from './schemas/costing';
 export * from './schemas/surveys';
 export * from './schemas/survey-defaults';
+export * from './schemas/uploads';
+export * from './schemas/catalogue';
+export * from './schemas/survey-estimate';
+export * from './schemas/client-page';
