@@ -8,9 +8,12 @@ type Db = Database | Tx;
 type PartValues = typeof parts.$inferInsert;
 type MovementValues = typeof stockMovements.$inferInsert;
 
-/** On hand and stock value of the part in the outer query: the sums of its movements. */
-const onHandOf = sql<string>`coalesce((select sum(m.quantity_milli) from stock_movements m where m.part_id = ${parts.id}), 0)::text`;
-const valueOf = sql<string>`coalesce((select sum(m.value_minor) from stock_movements m where m.part_id = ${parts.id}), 0)::text`;
+/**
+ * On hand and stock value of the part in the outer query: the sums of its movements. The outer
+ * column is named with its table in full (Drizzle leaves it bare when a query has one table).
+ */
+const onHandOf = sql<string>`coalesce((select sum(m.quantity_milli) from stock_movements m where m.part_id = "parts"."id"), 0)::text`;
+const valueOf = sql<string>`coalesce((select sum(m.value_minor) from stock_movements m where m.part_id = "parts"."id"), 0)::text`;
 
 const selectParts = (q: Db) =>
   q
