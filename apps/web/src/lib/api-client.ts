@@ -112,6 +112,7 @@ export const api = {
   get: <T>(path: string, schema: ResponseSchema<T>) => request('GET', path, schema),
   post: <T = undefined>(path: string, body?: unknown, schema?: ResponseSchema<T>) => request<T>('POST', path, schema, body ?? {}),
   patch: <T>(path: string, body: unknown, schema: ResponseSchema<T>) => request('PATCH', path, schema, body),
+  put: <T = undefined>(path: string, body: unknown, schema?: ResponseSchema<T>) => request<T>('PUT', path, schema, body),
   delete: (path: string) => request<undefined>('DELETE', path),
 };
 

@@ -1,10 +1,13 @@
 import type { QueryKey } from '@tanstack/react-query';
 import type { LiveEvent } from '@keybed/shared';
+import { benchKeys } from '@/features/bench/api/keys';
 import { boardKeys } from '@/features/board/api/keys';
 import { clientKeys } from '@/features/clients/api/keys';
 import { jobKeys } from '@/features/jobs/api/keys';
 import { pianoKeys } from '@/features/pianos/api/keys';
 import { stageKeys } from '@/features/stages/api/keys';
+import { taskKeys } from '@/features/tasks/api/keys';
+import { timesheetKeys } from '@/features/timesheets/api/keys';
 
 /**
  * The narrowest cached reads each live event can have changed. Events carry only a kind and an
@@ -25,6 +28,12 @@ export function keysFor(event: LiveEvent): QueryKey[] {
       return [clientKeys.detail(event.id), clientKeys.lists(), boardKeys.all, jobKeys.details(), pianoKeys.all];
     case 'piano.changed':
       return [pianoKeys.detail(event.id), pianoKeys.lists(), clientKeys.details(), boardKeys.all, jobKeys.details()];
+    case 'task.changed':
+      // Cards and the job page list the technicians with open tasks.
+      return [taskKeys.list(event.id), boardKeys.all, jobKeys.detail(event.id)];
+    case 'time.changed':
+      // Logged minutes show on tasks; who is on what on the job page; the technician's week.
+      return [benchKeys.running(), taskKeys.lists(), timesheetKeys.all];
     default:
       // A kind this build does not know yet: refresh the board, the page most likely open.
       return [boardKeys.all];
@@ -32,7 +41,7 @@ export function keysFor(event: LiveEvent): QueryKey[] {
 }
 
 /** After the stream was down, anything may have changed: refresh every board-related read. */
-export const keysAfterReconnect: QueryKey[] = [boardKeys.all, jobKeys.all, stageKeys.all, clientKeys.all, pianoKeys.all];
+export const keysAfterReconnect: QueryKey[] = [boardKeys.all, jobKeys.all, stageKeys.all, clientKeys.all, pianoKeys.all, taskKeys.all, benchKeys.all, timesheetKeys.all];
 
 export const isBoardKey = (key: QueryKey) => key[0] === boardKeys.all[0];
 export const boardMoveKey = boardKeys.moves();

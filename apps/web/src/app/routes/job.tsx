@@ -7,20 +7,48 @@ import { RegionBoundary } from '@/components/region-boundary';
 import { LoadingRegion, Skeleton } from '@/components/skeleton';
 import { paths } from '@/config/paths';
 import { useSignedInMember } from '@/features/auth/hooks/use-signed-in-member';
+import { useRunning } from '@/features/bench/api/get-running';
+import { useTechnicians } from '@/features/bench/api/get-technicians';
 import { jobQueryOptions, useJob } from '@/features/jobs/api/get-job';
 import { JobEditForm } from '@/features/jobs/components/job-edit-form';
 import { JobFacts } from '@/features/jobs/components/job-facts';
 import { JobOverview } from '@/features/jobs/components/job-overview';
 import { StageHistory } from '@/features/jobs/components/stage-history';
 import { STATUS_LABELS } from '@/features/jobs/lib/job-labels';
+import { useStages } from '@/features/stages/api/get-stages';
+import { jobTasksQueryOptions } from '@/features/tasks/api/get-job-tasks';
+import { JobTasks } from '@/features/tasks/components/job-tasks';
 import { canRunBoard } from '@/lib/roles';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   ({ params }: LoaderFunctionArgs) => {
-    if (params.id) void queryClient.prefetchQuery(jobQueryOptions(params.id));
+    if (params.id) {
+      void queryClient.prefetchQuery(jobQueryOptions(params.id));
+      void queryClient.prefetchQuery(jobTasksQueryOptions(params.id));
+    }
     return null;
   };
+
+/** The tasks section, with the stages, people and running timers it needs from other features. */
+function TasksSection({ jobId, currentStage }: { jobId: string; currentStage: { id: string; name: string } | undefined }) {
+  const me = useSignedInMember();
+  const canEdit = canRunBoard(me.role);
+  const stages = useStages();
+  const people = useTechnicians();
+  const running = useRunning();
+  return (
+    <JobTasks
+      jobId={jobId}
+      currentStage={currentStage}
+      canEdit={canEdit}
+      userId={me.user.id}
+      stages={(stages.data ?? []).filter((s) => !s.isArchived)}
+      people={people.data ?? []}
+      running={(running.data ?? []).filter((r) => r.job.id === jobId)}
+    />
+  );
+}
 
 function JobSkeleton() {
   return (
@@ -67,6 +95,12 @@ export function Component() {
           <section aria-labelledby="job-details-heading" className="space-y-3">
             <h2 id="job-details-heading" className="text-lg font-semibold">{canRunBoard(me.role) ? 'Edit the job' : 'Details'}</h2>
             <RegionBoundary>{canRunBoard(me.role) ? <JobEditForm job={data} /> : <JobOverview job={data} />}</RegionBoundary>
+          </section>
+          <section aria-labelledby="job-tasks-heading" className="space-y-3">
+            <h2 id="job-tasks-heading" className="text-lg font-semibold">Tasks</h2>
+            <RegionBoundary>
+              <TasksSection jobId={data.id} currentStage={isOnBoard ? data.history.at(-1)?.toStage : undefined} />
+            </RegionBoundary>
           </section>
           <section aria-labelledby="job-history-heading" className="space-y-3">
             <h2 id="job-history-heading" className="text-lg font-semibold">Stage history</h2>
