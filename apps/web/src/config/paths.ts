@@ -40,6 +40,15 @@ export const paths = {
   },
   piano: { path: '/pianos/:id', build: (id: string) => `/pianos/${encodeURIComponent(id)}` },
   stagesSettings: { path: '/settings/stages', build: () => '/settings/stages' },
+  wallScreensSettings: { path: '/settings/wall-screens', build: () => '/settings/wall-screens' },
+  profile: { path: '/profile', build: () => '/profile' },
+  timesheets: {
+    path: '/timesheets',
+    build: (options: { technicianId?: string; weekStart?: string } = {}) => withQuery('/timesheets', options),
+  },
+  /** The workshop's shared touch screen: its own full-screen layout, signed in by its device cookie. */
+  wall: { path: '/wall', build: () => '/wall' },
+  wallPair: { path: '/wall/pair', build: () => '/wall/pair' },
   ivoryHelp: { path: '/help/ivory', build: () => '/help/ivory' },
 } as const;
 
@@ -51,10 +60,12 @@ function withQuery(path: string, params: Record<string, string | undefined>): st
 }
 
 const PUBLIC_PREFIXES = ['/sign-in', '/sign-up', '/reset-password', '/invitations/'];
+/** The wall screen runs on its device cookie, never a member session, so it never bounces to sign-in. */
+const PUBLIC_EXACT = ['/wall'];
 
 /** Pages anyone may open without a session; a 401 there must not bounce to sign-in again. */
 export function isPublicPath(pathname: string): boolean {
-  return PUBLIC_PREFIXES.some((prefix) => pathname === prefix || pathname.startsWith(prefix));
+  return PUBLIC_EXACT.includes(pathname) || PUBLIC_PREFIXES.some((prefix) => pathname === prefix || pathname.startsWith(prefix));
 }
 
 /**

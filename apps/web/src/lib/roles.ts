@@ -17,3 +17,13 @@ export function canManageTeam(role: Role): boolean {
 export function canRunBoard(role: Role): boolean {
   return role === 'owner' || role === 'foreman';
 }
+
+/** Owners and foremen pair wall screens, unlock PINs, correct time entries and approve weeks. */
+export function canSuperviseBench(role: Role): boolean {
+  return role === 'owner' || role === 'foreman';
+}
+
+/** Only owners set someone else's PIN; the API enforces the same rule. */
+export function canSetMemberPins(role: Role): boolean {
+  return role === 'owner';
+}

@@ -19,19 +19,19 @@ export function AppHeader({ me, isWide = false }: { me: Me; isWide?: boolean }) 
               {me.workshop.name}
             </Link>
             <p className="truncate text-xs text-graphite-300">
-              <span className="sm:hidden">
+              <Link to={paths.profile.build()} className="underline-offset-2 hover:underline sm:hidden">
                 {me.user.name} · {ROLE_LABELS[me.role]}
-              </span>
+              </Link>
               <span className="hidden sm:inline">Keybed</span>
             </p>
           </div>
         </div>
         <MainNav role={me.role} className="order-3 w-full lg:order-2 lg:w-auto lg:flex-1" />
         <div className="order-2 flex items-center gap-3 lg:order-3">
-          <p className="hidden text-right text-sm leading-tight sm:block">
+          <Link to={paths.profile.build()} aria-label={`Your profile: ${me.user.name}, ${ROLE_LABELS[me.role]}`} className="hidden text-right text-sm leading-tight hover:underline sm:block">
             <span className="block font-semibold">{me.user.name}</span>
             <span className="block text-graphite-300">{ROLE_LABELS[me.role]}</span>
-          </p>
+          </Link>
           <SignOutButton />
         </div>
       </div>

@@ -1,0 +1,141 @@
+import { useCallback, useEffect, useRef, useState } from 'react';
+import type { WallTask, WallTechnician, WallTechnicianTasks } from '@keybed/shared';
+import { isApiError } from '@/lib/api-client';
+import { verifyPin } from '../api/wall-actions';
+import { waitingFor } from '../lib/clock-queue';
+import { isNetworkFailure } from '../lib/send-outcome';
+import { lockedMinutes, lockedText, noPinText, wallErrorText } from '../lib/wall-messages';
+import { savedText, waitingReportText, type WallNotice } from '../lib/wall-notice';
+import type { ClockQueue, NewClockAction } from './use-clock-queue';
+
+export type SessionStep =
+  /** Nothing to enter: no PIN yet, or locked. */
+  | { name: 'blocked'; text: string }
+  | { name: 'pin'; message?: string | undefined }
+  /** `data` is null when offline and this screen has no task list for them yet. */
+  | { name: 'tasks'; data: WallTechnicianTasks | null; isOffline: boolean; note?: string | undefined };
+
+/** Refusals that leave nothing to try on the pad. */
+const BLOCKING = new Set(['pin_locked', 'pin_not_set', 'wall_pin_limit']);
+const RETRY_MS = 10_000;
+
+interface Options {
+  technician: WallTechnician;
+  queue: ClockQueue;
+  /** The last task list this screen saw for them (memory only), for when the network is down. */
+  cachedTasks: WallTechnicianTasks | undefined;
+  onTasksLoaded: (data: WallTechnicianTasks) => void;
+  onClose: (notice?: WallNotice) => void;
+  onUnpaired: () => void;
+}
+
+function firstStep(technician: WallTechnician): SessionStep {
+  if (!technician.hasPin) return { name: 'blocked', text: noPinText(technician.name) };
+  if (technician.lockedUntil && Date.parse(technician.lockedUntil) > Date.now()) {
+    return { name: 'blocked', text: lockedText(lockedMinutes(technician.lockedUntil, Date.now())) };
+  }
+  return { name: 'pin' };
+}
+
+/**
+ * One technician's turn at the wall. The PIN they enter is held in memory only while their
+ * context is open (each clock action must carry it) and dropped when it closes; the offline
+ * queue never stores it.
+ */
+export function useTechnicianSession({ technician, queue, cachedTasks, onTasksLoaded, onClose, onUnpaired }: Options) {
+  const [step, setStep] = useState<SessionStep>(() => firstStep(technician));
+  const [isBusy, setIsBusy] = useState(false);
+  const pin = useRef<string | null>(null);
+  const latest = useRef({ queue, step, isBusy });
+  latest.current = { queue, step, isBusy };
+  const { name } = technician;
+
+  useEffect(() => () => void (pin.current = null), []);
+
+  const failed = useCallback(
+    (error: unknown) => {
+      if (isApiError(error) && error.code === 'wall_not_paired') return onUnpaired();
+      pin.current = null;
+      if (isApiError(error) && BLOCKING.has(error.code)) return setStep({ name: 'blocked', text: wallErrorText(error, name) });
+      setStep({ name: 'pin', message: wallErrorText(error, name) });
+    },
+    [name, onUnpaired],
+  );
+
+  /** Checks the PIN; sends anything of theirs waiting on this screen; shows their tasks. */
+  const check = useCallback(
+    async (entered: string) => {
+      setIsBusy(true);
+      try {
+        let data = await verifyPin(technician.id, entered);
+        pin.current = entered;
+        let note: string | undefined;
+        if (waitingFor(latest.current.queue.actions, technician.id).length > 0) {
+          const report = await latest.current.queue.sendFor(technician.id, entered);
+          note = waitingReportText(report);
+          if (report.sent.length > 0) data = await verifyPin(technician.id, entered).catch(() => data);
+        }
+        onTasksLoaded(data);
+        setStep({ name: 'tasks', data, isOffline: false, note });
+      } catch (error) {
+        if (!isNetworkFailure(error)) return failed(error);
+        // The PIN cannot be checked now; it is checked when the actions are sent.
+        pin.current = entered;
+        setStep({ name: 'tasks', data: cachedTasks ?? null, isOffline: true });
+      } finally {
+        setIsBusy(false);
+      }
+    },
+    [technician.id, cachedTasks, onTasksLoaded, failed],
+  );
+
+  /** Writes the action to the device, sends it (after any earlier ones), and closes or explains. */
+  const act = useCallback(
+    async (action: NewClockAction, doneText: string) => {
+      if (!pin.current) return setStep({ name: 'pin' });
+      setIsBusy(true);
+      let queued, report;
+      try {
+        queued = await queue.record(action);
+        report = await queue.sendFor(technician.id, pin.current, queued.key);
+      } catch {
+        return onClose({ tone: 'problem', text: 'This screen could not keep that action. Try again.' });
+      } finally {
+        setIsBusy(false);
+      }
+      if (report.sent.some((a) => a.key === queued.key)) return onClose({ tone: 'done', text: doneText });
+      const refused = report.refused.find((a) => a.key === queued.key);
+      if (refused) {
+        // They are here to read why; it need not wait on the screen.
+        await queue.dismiss(queued.key);
+        return setStep((s) => (s.name === 'tasks' ? { ...s, note: refused.refusal?.message } : s));
+      }
+      const error = report.stoppedBy;
+      if (isNetworkFailure(error) || !isApiError(error) || error.status >= 500) return onClose({ tone: 'saved', text: savedText(name, doneText) });
+      failed(error);
+    },
+    [queue, technician.id, name, onClose, failed],
+  );
+
+  const clockOn = (task: WallTask) =>
+    act({ kind: 'clock-on', technician: { id: technician.id, name }, task: { id: task.id, title: task.title, jobTitle: task.job.title } }, `${name} is on ${task.title}.`);
+  const clockOff = () => act({ kind: 'clock-off', technician: { id: technician.id, name } }, `${name} clocked off.`);
+
+  // While their context is open: when the network returns, check the PIN and send what waits.
+  useEffect(() => {
+    const retry = () => {
+      const { step: current, isBusy: busy, queue: q } = latest.current;
+      if (busy || !pin.current) return;
+      if (current.name === 'tasks' && current.isOffline) return void check(pin.current);
+      if (waitingFor(q.actions, technician.id).length > 0) void q.sendFor(technician.id, pin.current);
+    };
+    window.addEventListener('online', retry);
+    const timer = setInterval(retry, RETRY_MS);
+    return () => {
+      window.removeEventListener('online', retry);
+      clearInterval(timer);
+    };
+  }, [check, technician.id]);
+
+  return { step, isBusy, check, clockOn, clockOff };
+}

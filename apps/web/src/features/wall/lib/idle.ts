@@ -1,0 +1,7 @@
+/** A technician's context on the wall closes by itself after this long without a touch. */
+export const IDLE_LIMIT_MS = 30_000;
+
+/** Whole seconds left before the context closes (rounded up, so it shows 30 … 1, then 0). */
+export function idleSecondsLeft(lastActivityMs: number, nowMs: number, limitMs = IDLE_LIMIT_MS): number {
+  return Math.max(0, Math.ceil((lastActivityMs + limitMs - nowMs) / 1000));
+}
