@@ -31,7 +31,7 @@ export const stages = pgTable(
   ],
 );
 
-export const jobStatusEnum = pgEnum('job_status', ['active', 'on_hold', 'done', 'cancelled']);
+export const jobStatusEnum = pgEnum('job_status', ['active', 'on_hold', 'done', 'cancelled', 'proposed']);
 export const jobPriorityEnum = pgEnum('job_priority', ['low', 'normal', 'high', 'urgent']);
 
 /**

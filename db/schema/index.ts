@@ -6,3 +6,8 @@ export * from './bench';
 export * from './costing';
 export * from './parts';
 export * from './estimates';
+export * from './surveys';
+export * from './uploads';
+export * from './catalogue';
+export * from './client-links';
+export * from './payments';

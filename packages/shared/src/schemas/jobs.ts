@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { Id } from './common';
-import { JobStatus } from './job-status';
+import { JobStatus, SettableJobStatus } from './job-status';
 import { KeytopMaterial, PianoType } from './pianos';
 
-export { JOB_STATUSES, JobStatus, ON_BOARD_STATUSES, isOnBoard } from './job-status';
+export { JOB_STATUSES, JobStatus, ON_BOARD_STATUSES, SettableJobStatus, isOnBoard } from './job-status';
 
 export const JOB_PRIORITIES = ['low', 'normal', 'high', 'urgent'] as const;
 export const JobPriority = z.enum(JOB_PRIORITIES, { error: 'Choose low, normal, high or urgent' });
@@ -30,7 +30,7 @@ export const UpdateJobInput = z
   .object({
     version: z.number({ error: 'Version must be a number' }).int().min(1),
     title: Title.optional(),
-    status: JobStatus.optional(),
+    status: SettableJobStatus.optional(),
     priority: JobPriority.optional(),
     promisedOn: DateOnly.nullable().optional(),
     isBlocked: z.boolean().optional(),

@@ -27,7 +27,7 @@ export interface ClockOutcome {
 const FUTURE_TOLERANCE_MS = 60_000;
 const MAX_REPLAY_AGE_MS = MAX_REPLAY_AGE_HOURS * 3600_000;
 
-const JOB_STATUS_WORDS: Record<JobStatus, string> = { active: 'active', on_hold: 'on hold', done: 'done', cancelled: 'cancelled' };
+const JOB_STATUS_WORDS: Record<JobStatus, string> = { active: 'active', on_hold: 'on hold', done: 'done', cancelled: 'cancelled', proposed: 'waiting for the client' };
 
 const atField = (message: string) => new AppError('validation_failed', 400, message, { at: [message] });
 const keyReused = () =>

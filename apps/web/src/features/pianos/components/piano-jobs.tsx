@@ -4,7 +4,7 @@ import { TextLink } from '@/components/text-link';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
 
-const STATUS_LABELS: Record<JobStatus, string> = { active: 'Active', on_hold: 'On hold', done: 'Done', cancelled: 'Cancelled' };
+const STATUS_LABELS: Record<JobStatus, string> = { active: 'Active', on_hold: 'On hold', done: 'Done', cancelled: 'Cancelled', proposed: 'Proposed' };
 
 /** Every job this piano has had, newest first. */
 export function PianoJobs({ piano }: { piano: PianoDetail }) {
