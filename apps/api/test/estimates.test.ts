@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Estimate, JobEstimates, Task, type EstimateLineInput } from '@keybed/shared';
+import { Estimate, JobEstimates, Task } from '@keybed/shared';
 import { createJob } from './board-fixtures';
 import { createTestApp, type TestApp } from './helpers';
 import { ANY_MONEY, COSTS, createPart, keysMatching, moneyWorkshop, SCENARIO_PARTS, type MoneyWorkshop } from './money-fixtures';
@@ -37,11 +37,11 @@ function salonGrand(hangTaskId?: string) {
       { kind: 'labour', description: 'Recover and reshape the hammers', minutes: 900, optionKey: 'recover-hammers' },
       { kind: 'labour', description: 'Revive the shellac', minutes: 600, optionKey: 'revive' },
       { kind: 'sublet', description: 'Black polyester refinish (Heathside Finishers)', unitPriceMinor: 185000, unitCostMinor: 145000, optionKey: 'refinish' },
-    ] satisfies EstimateLineInput[],
+    ],
   };
 }
 
-async function draft(jobId: string, body: unknown = salonGrand()) {
+async function draft(jobId: string, body: object = salonGrand()) {
   const res = await w.owner.agent.post(`/api/jobs/${jobId}/estimates`).send(body);
   if (res.status !== 201) throw new Error(`POST estimates answered ${res.status}: ${JSON.stringify(res.body)}`);
   return Estimate.parse(res.body);
