@@ -89,6 +89,23 @@ describe('POST /api/auth/sign-out and GET /api/me', () => {
     await t.request().get('/api/me').expect(401);
   });
 
+  it('when a session is past half its idle span, then it is extended and the cookie sent again', async () => {
+    const { agent, me } = await signUpWorkshop(t);
+    await t.sql`update sessions set expires_at = now() + interval '1 hour' where user_id = ${me.user.id}`;
+    const res = await agent.get('/api/me').expect(200);
+    expect(String(res.headers['set-cookie'])).toMatch(/keybed_session=/);
+    const [row] = await t.sql`select expires_at > now() + interval '7 hours' as "isExtended" from sessions where user_id = ${me.user.id}`;
+    expect(row?.isExtended).toBe(true);
+  });
+
+  it('when a session has passed its idle expiry, then it is refused and removed', async () => {
+    const { agent, me } = await signUpWorkshop(t);
+    await t.sql`update sessions set expires_at = now() - interval '1 second' where user_id = ${me.user.id}`;
+    await agent.get('/api/me').expect(401);
+    const rows = await t.sql`select 1 from sessions where user_id = ${me.user.id}`;
+    expect(rows).toHaveLength(0);
+  });
+
   it('when a session passes its absolute lifetime, then it is refused even while in use', async () => {
     const { agent, me } = await signUpWorkshop(t);
     await t.sql`update sessions set created_at = now() - interval '13 hours' where user_id = ${me.user.id}`;

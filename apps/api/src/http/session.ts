@@ -1,10 +1,5 @@
 import type { CookieOptions, Request, RequestHandler, Response } from 'express';
-import type { Role } from '@keybed/shared';
 import { SESSION_COOKIE, type ActiveSession, type SessionStore } from '../lib/sessions';
-
-export interface MembershipLookup {
-  (userId: string, workshopId: string): Promise<{ id: string; role: Role; isActive: boolean } | undefined>;
-}
 
 function cookieOptions(req: Request): CookieOptions {
   return { httpOnly: true, sameSite: 'lax', secure: req.secure, path: '/' };
@@ -19,12 +14,12 @@ export function clearSessionCookie(req: Request, res: Response) {
 }
 
 /** Resolves the session cookie into `req.auth`; a dead or deactivated session clears the cookie. */
-export function sessionMiddleware(store: SessionStore, findMembership: MembershipLookup): RequestHandler {
+export function sessionMiddleware(store: SessionStore): RequestHandler {
   return async (req, res, next) => {
     const id = store.readCookie(req.headers.cookie);
     if (!id) return next();
     const session = await store.validate(id);
-    const membership = session && (await findMembership(session.userId, session.workshopId));
+    const membership = session?.membership;
     if (!session || !membership?.isActive) {
       if (session) await store.end(session.id);
       clearSessionCookie(req, res);

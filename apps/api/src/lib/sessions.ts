@@ -1,8 +1,9 @@
 import { DrizzlePostgreSQLAdapter } from '@lucia-auth/adapter-drizzle';
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import { Lucia, TimeSpan } from 'lucia';
 import type { Database } from '@keybed/db/client';
-import { sessions, users } from '@keybed/db/schema';
+import { memberships, sessions, users } from '@keybed/db/schema';
+import type { Role } from '@keybed/shared';
 
 interface SessionRow {
   workshopId: string;
@@ -27,6 +28,11 @@ export interface ActiveSession {
   isRenewed: boolean;
 }
 
+/** A valid session together with the membership it acts for (active or not). */
+export interface SessionWithMember extends ActiveSession {
+  membership: { id: string; role: Role; isActive: boolean };
+}
+
 export const SESSION_COOKIE = 'keybed_session';
 
 /**
@@ -41,6 +47,22 @@ export function createSessionStore(db: Database, opts: { idleHours: number; abso
     getSessionAttributes: (row) => ({ workshopId: row.workshopId, createdAt: new Date(row.createdAt) }),
   });
   const absoluteMs = opts.absoluteHours * 3600_000;
+  const idleMs = opts.idleHours * 3600_000;
+  const lookup = db
+    .select({
+      userId: sessions.userId,
+      workshopId: sessions.workshopId,
+      expiresAt: sessions.expiresAt,
+      createdAt: sessions.createdAt,
+      membershipId: memberships.id,
+      role: memberships.role,
+      isActive: memberships.isActive,
+    })
+    .from(sessions)
+    .innerJoin(memberships, and(eq(memberships.userId, sessions.userId), eq(memberships.workshopId, sessions.workshopId)))
+    .where(eq(sessions.id, sql.placeholder('id')))
+    .limit(1)
+    .prepare('keybed_session_lookup');
 
   return {
     readCookie: (header: string | undefined) => lucia.readSessionCookie(header ?? ''),
@@ -50,14 +72,33 @@ export function createSessionStore(db: Database, opts: { idleHours: number; abso
       return { id: s.id, userId, workshopId, expiresAt: s.expiresAt, isRenewed: true };
     },
 
-    async validate(sessionId: string, now = new Date()): Promise<ActiveSession | null> {
-      const { session } = await lucia.validateSession(sessionId);
-      if (!session) return null;
-      if (now.getTime() - session.createdAt.getTime() > absoluteMs) {
-        await lucia.invalidateSession(session.id);
+    /**
+     * Reads the session and its membership in one prepared query (this runs on every request),
+     * then applies lucia's rules: expired → gone; past half its idle span → extended; and ours:
+     * past the absolute lifetime → gone.
+     */
+    async validate(sessionId: string, now = new Date()): Promise<SessionWithMember | null> {
+      const [row] = await lookup.execute({ id: sessionId });
+      if (!row) return null;
+      const isExpired = now.getTime() >= row.expiresAt.getTime();
+      if (isExpired || now.getTime() - row.createdAt.getTime() > absoluteMs) {
+        await lucia.invalidateSession(sessionId);
         return null;
       }
-      return { id: session.id, userId: session.userId, workshopId: session.workshopId, expiresAt: session.expiresAt, isRenewed: session.fresh };
+      let expiresAt = row.expiresAt;
+      const isRenewed = expiresAt.getTime() - now.getTime() < idleMs / 2;
+      if (isRenewed) {
+        expiresAt = new Date(now.getTime() + idleMs);
+        await db.update(sessions).set({ expiresAt }).where(eq(sessions.id, sessionId));
+      }
+      return {
+        id: sessionId,
+        userId: row.userId,
+        workshopId: row.workshopId,
+        expiresAt,
+        isRenewed,
+        membership: { id: row.membershipId, role: row.role, isActive: row.isActive },
+      };
     },
 
     end: (sessionId: string) => lucia.invalidateSession(sessionId),

@@ -35,15 +35,6 @@ export function createAuthRepo(db: Database) {
       return row;
     },
 
-    async findMembership(userId: string, workshopId: string) {
-      const [row] = await db
-        .select({ id: memberships.id, role: memberships.role, isActive: memberships.isActive })
-        .from(memberships)
-        .where(and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)))
-        .limit(1);
-      return row as { id: string; role: Role; isActive: boolean } | undefined;
-    },
-
     async findMe(userId: string, workshopId: string) {
       const [row] = await db
         .select({
