@@ -101,7 +101,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   api.use(express.json({ limit: '1mb' }));
   api.use(sameOriginOnly(config.appOrigin));
   api.use(healthRouter(sql));
-  api.use(sessionMiddleware(sessions, authRepo.findMembership));
+  api.use(sessionMiddleware(sessions));
   api.use(bench.wallDevice);
   api.use(authRouter(auth, sessions, config.limits));
   api.use(teamRouter(team, auth, sessions));
