@@ -68,10 +68,11 @@ export const catalogueLines = pgTable(
     check('catalogue_lines_position_non_negative', sql`${t.position} >= 0`),
     check(
       'catalogue_lines_kind_rules',
+      // coalesce: a NULL would make the whole CHECK unknown, which PostgreSQL lets through.
       sql`case ${t.kind}
-        when 'labour' then ${t.minutes} between 1 and 30000 and ${t.partId} is null and ${t.quantityMilli} is null and ${t.unitPriceMinor} is null and ${t.unitCostMinor} is null
-        when 'part' then ${t.partId} is not null and ${t.quantityMilli} > 0 and ${t.minutes} is null and ${t.unitPriceMinor} is null and ${t.unitCostMinor} is null
-        else ${t.quantityMilli} > 0 and ${t.unitPriceMinor} >= 0 and coalesce(${t.unitCostMinor}, 0) >= 0 and ${t.minutes} is null and ${t.partId} is null
+        when 'labour' then coalesce(${t.minutes} between 1 and 30000, false) and ${t.partId} is null and ${t.quantityMilli} is null and ${t.unitPriceMinor} is null and ${t.unitCostMinor} is null
+        when 'part' then ${t.partId} is not null and coalesce(${t.quantityMilli} > 0, false) and ${t.minutes} is null and ${t.unitPriceMinor} is null and ${t.unitCostMinor} is null
+        else coalesce(${t.quantityMilli} > 0 and ${t.unitPriceMinor} >= 0, false) and coalesce(${t.unitCostMinor}, 0) >= 0 and ${t.minutes} is null and ${t.partId} is null
       end`,
     ),
     index().on(t.operationId),

@@ -6,6 +6,7 @@ import { pinoHttp } from 'pino-http';
 import type { Sql } from 'postgres';
 import type { Database } from '@keybed/db/client';
 import type { Config } from './config/env';
+import { createAssessments } from './assessments';
 import { createBench } from './bench';
 import { apiNotFound, errorHandler } from './http/errors';
 import { sameOriginOnly, securityHeaders } from './http/security';
@@ -79,6 +80,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians, cache: boardCache });
   const bench = createBench({ db, live, sessions, logger, limits: config.limits, now, changed });
   const money = createMoney({ db, logger, limits: config.limits, now, changed });
+  const assessments = createAssessments({ db, now, changed });
 
   app.use(
     pinoHttp({
@@ -113,6 +115,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   api.use(eventsRouter(live, createEventsRepo(db), now));
   api.use(bench.router);
   api.use(money.router);
+  api.use(assessments.router);
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -26,7 +26,23 @@ export const EnvSchema = z.object({
   RESET_REQUESTS_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
   RESET_REQUESTS_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
   WALL_PIN_FAILURES_PER_DEVICE_PER_HOUR: z.coerce.number().int().min(1).default(20),
-});
+  UPLOAD_DIR: z.string().min(1).default('.data/uploads'),
+  UPLOAD_MAX_MB: z.coerce.number().positive().max(100).default(15),
+  UPLOAD_MAX_FILES: z.coerce.number().int().min(1).max(50).default(10),
+  S3_ENDPOINT: z.url().optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().optional(),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_FORCE_PATH_STYLE: bool.default(true),
+  STRIPE_SECRET_KEY: z.string().optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().optional(),
+  STRIPE_API_HOST: z.string().optional(),
+  STRIPE_API_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  STRIPE_API_PROTOCOL: z.enum(['http', 'https']).optional(),
+})
+  .refine((e) => !e.S3_BUCKET || (e.S3_ACCESS_KEY_ID && e.S3_SECRET_ACCESS_KEY), { error: 'S3_BUCKET needs S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY', path: ['S3_BUCKET'] })
+  .refine((e) => !e.STRIPE_SECRET_KEY || e.STRIPE_WEBHOOK_SECRET, { error: 'STRIPE_SECRET_KEY needs STRIPE_WEBHOOK_SECRET', path: ['STRIPE_WEBHOOK_SECRET'] });
 
 export type Env = z.infer<typeof EnvSchema>;
 
@@ -50,6 +66,16 @@ export interface Config {
     /** Wrong PINs one wall screen may send in an hour before it is refused. */
     wallPinFailuresPerDevicePerHour: number;
   };
+  uploads: {
+    /** Local storage folder (used when no S3 bucket is configured). */
+    dir: string;
+    maxBytes: number;
+    maxFiles: number;
+    /** S3-compatible object storage; when set, photos go there instead of `dir`. */
+    s3?: { endpoint?: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string; forcePathStyle: boolean };
+  };
+  /** Card payments through the provider's SDK; absent when not configured (deposits are then refused). */
+  payments?: { secretKey: string; webhookSecret: string; host?: string; port?: number; protocol?: 'http' | 'https' };
 }
 
 /** Parses the environment, failing with a list of every bad variable. */
@@ -79,5 +105,16 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
       resetPerAddress: e.RESET_REQUESTS_PER_ADDRESS,
       wallPinFailuresPerDevicePerHour: e.WALL_PIN_FAILURES_PER_DEVICE_PER_HOUR,
     },
+    uploads: {
+      dir: e.UPLOAD_DIR,
+      maxBytes: Math.round(e.UPLOAD_MAX_MB * 1024 * 1024),
+      maxFiles: e.UPLOAD_MAX_FILES,
+      s3: e.S3_BUCKET
+        ? { endpoint: e.S3_ENDPOINT, region: e.S3_REGION, bucket: e.S3_BUCKET, accessKeyId: e.S3_ACCESS_KEY_ID!, secretAccessKey: e.S3_SECRET_ACCESS_KEY!, forcePathStyle: e.S3_FORCE_PATH_STYLE }
+        : undefined,
+    },
+    payments: e.STRIPE_SECRET_KEY
+      ? { secretKey: e.STRIPE_SECRET_KEY, webhookSecret: e.STRIPE_WEBHOOK_SECRET!, host: e.STRIPE_API_HOST, port: e.STRIPE_API_PORT, protocol: e.STRIPE_API_PROTOCOL }
+      : undefined,
   };
 }

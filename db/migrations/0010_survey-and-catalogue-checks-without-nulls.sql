@@ -1,0 +1,10 @@
+ALTER TABLE "survey_components" DROP CONSTRAINT "survey_components_pitch_measured_here";--> statement-breakpoint
+ALTER TABLE "survey_components" DROP CONSTRAINT "survey_components_torque_measured_here";--> statement-breakpoint
+ALTER TABLE "catalogue_lines" DROP CONSTRAINT "catalogue_lines_kind_rules";--> statement-breakpoint
+ALTER TABLE "survey_components" ADD CONSTRAINT "survey_components_pitch_measured_here" CHECK ("survey_components"."a4_pitch_centi_hz" is null or ("survey_components"."measure" is not null and "survey_components"."measure" = 'a4_pitch' and "survey_components"."a4_pitch_centi_hz" between 30000 and 50000));--> statement-breakpoint
+ALTER TABLE "survey_components" ADD CONSTRAINT "survey_components_torque_measured_here" CHECK ("survey_components"."tuning_pin_torque_deci_nm" is null or ("survey_components"."measure" is not null and "survey_components"."measure" = 'tuning_pin_torque' and "survey_components"."tuning_pin_torque_deci_nm" between 0 and 400));--> statement-breakpoint
+ALTER TABLE "catalogue_lines" ADD CONSTRAINT "catalogue_lines_kind_rules" CHECK (case "catalogue_lines"."kind"
+        when 'labour' then coalesce("catalogue_lines"."minutes" between 1 and 30000, false) and "catalogue_lines"."part_id" is null and "catalogue_lines"."quantity_milli" is null and "catalogue_lines"."unit_price_minor" is null and "catalogue_lines"."unit_cost_minor" is null
+        when 'part' then "catalogue_lines"."part_id" is not null and coalesce("catalogue_lines"."quantity_milli" > 0, false) and "catalogue_lines"."minutes" is null and "catalogue_lines"."unit_price_minor" is null and "catalogue_lines"."unit_cost_minor" is null
+        else coalesce("catalogue_lines"."quantity_milli" > 0 and "catalogue_lines"."unit_price_minor" >= 0, false) and coalesce("catalogue_lines"."unit_cost_minor", 0) >= 0 and "catalogue_lines"."minutes" is null and "catalogue_lines"."part_id" is null
+      end);
