@@ -3,6 +3,7 @@ import type { Database } from '../client';
 import { DEFAULT_STAGE_NAMES } from '@keybed/shared';
 import { clients, jobs, jobStageEvents, memberships, pianos, stages, users, workshops } from '../schema/index';
 import { seedBench } from './bench';
+import { seedMoney } from './money';
 import { DEMO_CLIENTS, DEMO_JOBS, DEMO_MEMBERS, DEMO_PASSWORD, DEMO_PIANOS, DEMO_WORKSHOP, demoDate, demoInstant } from './demo';
 
 export { DEMO_MEMBERS, DEMO_PASSWORD, DEMO_WORKSHOP };
@@ -38,6 +39,7 @@ export async function seedDemo(db: Database, hashPassword: (password: string) =>
     await tx.insert(pianos).values(DEMO_PIANOS.map((p) => ({ ...p, workshopId: DEMO_WORKSHOP.id }))).onConflictDoNothing();
     jobCount = await seedJobs(tx, idByEmail.get('tom@fennick.example') ?? null, now);
     await seedBench(tx, hashPassword, now);
+    await seedMoney(tx, now);
   });
   const [workshop] = await db.select({ name: workshops.name }).from(workshops).where(eq(workshops.id, DEMO_WORKSHOP.id));
   return { workshop: workshop?.name ?? DEMO_WORKSHOP.name, members: DEMO_MEMBERS.length, jobs: jobCount };
