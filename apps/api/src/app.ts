@@ -80,7 +80,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians, cache: boardCache });
   const bench = createBench({ db, live, sessions, logger, limits: config.limits, now, changed });
   const money = createMoney({ db, logger, limits: config.limits, now, changed });
-  const assessments = createAssessments({ db, now, changed });
+  const assessments = createAssessments({ config, db, mailer, logger, now, changed });
 
   app.use(
     pinoHttp({

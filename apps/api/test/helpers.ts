@@ -1,4 +1,7 @@
 import crypto from 'node:crypto';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import postgres from 'postgres';
 import supertest from 'supertest';
 import { inject } from 'vitest';
@@ -42,17 +45,22 @@ export interface TestAppOptions {
   now?: () => Date;
   /** Sees every SQL statement the app sends. */
   onQuery?: (query: string) => void;
+  /** More environment for the app (S3, payments…); photos go to a fresh temporary folder unless UPLOAD_DIR is given. */
+  env?: Record<string, string>;
 }
 
 /** The real app on a real database and the real SMTP client pointed at the fake mail server. */
 export async function createTestApp(options: TestAppOptions = {}) {
   const database = await createTestDatabase({ onQuery: options.onQuery });
+  const uploadDir = fs.mkdtempSync(path.join(os.tmpdir(), 'keybed-uploads-'));
   const base = loadConfig({
+    UPLOAD_DIR: uploadDir,
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
     APP_ORIGIN,
     SMTP_PORT: String(inject('smtpPort')),
     LOG_LEVEL: 'silent',
+    ...options.env,
   });
   const config: Config = { ...base, limits: { ...base.limits, ...options.limits } };
   const mailer = createSmtpMailer(config.smtp);
@@ -61,6 +69,7 @@ export async function createTestApp(options: TestAppOptions = {}) {
     app,
     config,
     databaseUrl: database.url,
+    uploadDir: base.uploads.dir,
     db: database.db,
     sql: database.sql,
     agent: () => supertest.agent(app),
@@ -69,6 +78,7 @@ export async function createTestApp(options: TestAppOptions = {}) {
       await app.close();
       mailer.close();
       await database.drop();
+      fs.rmSync(uploadDir, { recursive: true, force: true });
     },
   };
 }
