@@ -28,7 +28,8 @@ export function AppHeader({ me, isWide = false }: { me: Me; isWide?: boolean }) 
         </div>
         <MainNav role={me.role} className="order-3 w-full lg:order-2 lg:w-auto lg:flex-1" />
         <div className="order-2 flex items-center gap-3 lg:order-3">
-          <Link to={paths.profile.build()} aria-label={`Your profile: ${me.user.name}, ${ROLE_LABELS[me.role]}`} className="hidden text-right text-sm leading-tight hover:underline sm:block">
+          <Link to={paths.profile.build()} className="hidden text-right text-sm leading-tight hover:underline sm:block">
+            <span className="sr-only">Your profile: </span>
             <span className="block font-semibold">{me.user.name}</span>
             <span className="block text-graphite-300">{ROLE_LABELS[me.role]}</span>
           </Link>

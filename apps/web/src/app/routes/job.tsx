@@ -92,15 +92,15 @@ export function Component() {
       />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-8">
-          <section aria-labelledby="job-details-heading" className="space-y-3">
-            <h2 id="job-details-heading" className="text-lg font-semibold">{canRunBoard(me.role) ? 'Edit the job' : 'Details'}</h2>
-            <RegionBoundary>{canRunBoard(me.role) ? <JobEditForm job={data} /> : <JobOverview job={data} />}</RegionBoundary>
-          </section>
           <section aria-labelledby="job-tasks-heading" className="space-y-3">
             <h2 id="job-tasks-heading" className="text-lg font-semibold">Tasks</h2>
             <RegionBoundary>
               <TasksSection jobId={data.id} currentStage={isOnBoard ? data.history.at(-1)?.toStage : undefined} />
             </RegionBoundary>
+          </section>
+          <section aria-labelledby="job-details-heading" className="space-y-3">
+            <h2 id="job-details-heading" className="text-lg font-semibold">{canRunBoard(me.role) ? 'Edit the job' : 'Details'}</h2>
+            <RegionBoundary>{canRunBoard(me.role) ? <JobEditForm job={data} /> : <JobOverview job={data} />}</RegionBoundary>
           </section>
           <section aria-labelledby="job-history-heading" className="space-y-3">
             <h2 id="job-history-heading" className="text-lg font-semibold">Stage history</h2>

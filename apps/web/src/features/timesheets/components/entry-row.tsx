@@ -26,18 +26,21 @@ export function EntryRow({ entry, minutes, timeZone, canCorrect, renderTaskField
   const isRunning = entry.endedAt === null;
   const range = `${localClockTime(entry.startedAt, timeZone)} – ${isRunning ? 'now' : localClockTime(entry.endedAt!, timeZone)}`;
   return (
-    <li aria-label={`${range}, ${entry.task.title}`} className={cx('grid gap-3 border-t border-graphite-200 px-4 py-3 first:border-t-0 lg:grid-cols-[1fr_22rem]', entry.needsReview && 'bg-spruce-light')}>
+    <li
+      aria-label={`${range}, ${entry.task.title}`}
+      className={cx('grid gap-3 border-t border-graphite-200 px-4 py-3 first:border-t-0', entry.corrections.length > 0 && 'lg:grid-cols-[1fr_20rem]', entry.needsReview && 'bg-spruce-light')}
+    >
       <div className="min-w-0">
         <div className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
-          <span className="w-32 font-semibold tabular-figures">{range}</span>
-          <span className="min-w-0 flex-1">
+          <span className="w-28 shrink-0 font-semibold tabular-figures">{range}</span>
+          <span className="min-w-48 flex-1">
             <span className="font-semibold">{entry.task.title}</span>
             <span className="text-graphite-600"> · </span>
             <Link to={paths.job.build(entry.job.id)} className="text-graphite-700 underline underline-offset-2">
               {entry.job.title}
             </Link>
           </span>
-          <span className="font-semibold tabular-figures">{formatHoursMinutes(minutes)}</span>
+          <span className="ml-auto font-semibold tabular-figures">{formatHoursMinutes(minutes)}</span>
         </div>
         <p className="mt-1 flex flex-wrap gap-2 text-sm">
           <span className="text-graphite-600">{SOURCE_LABELS[entry.source]}</span>

@@ -13,7 +13,7 @@ interface PinPadProps {
 
 const KEYS = ['1', '2', '3', '4', '5', '6', '7', '8', '9'] as const;
 const keyClasses =
-  'flex min-h-20 items-center justify-center rounded-xl border-2 border-graphite-400 bg-white text-wall font-bold text-ink shadow-sm active:bg-graphite-200 disabled:opacity-50';
+  'flex min-h-20 items-center justify-center rounded-xl lg:min-h-24 border-2 border-graphite-400 bg-white text-wall font-bold text-ink shadow-sm active:bg-graphite-200 disabled:opacity-50';
 
 /** Six masked dots and a large keypad; a keyboard works too (digits, Backspace, Delete, Enter). */
 export function PinPad({ pin, onChange, onSubmit, isBusy, message }: PinPadProps) {
@@ -35,7 +35,7 @@ export function PinPad({ pin, onChange, onSubmit, isBusy, message }: PinPadProps
   }, [pin, isBusy, onChange, onSubmit]);
 
   return (
-    <div className="mx-auto flex w-full max-w-md flex-col items-center gap-5">
+    <div className="mx-auto flex w-full max-w-md flex-col items-center gap-5 lg:max-w-xl">
       <p className="text-wall-sm font-semibold">Enter your PIN</p>
       <div role="img" aria-label={`${pin.length} of ${PIN_LENGTH} digits entered`} className="flex gap-4">
         {Array.from({ length: PIN_LENGTH }, (_, i) => (

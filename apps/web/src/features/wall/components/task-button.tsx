@@ -7,7 +7,7 @@ export function TaskButton({ task, isRunning, isBusy, onPick }: { task: WallTask
       type="button"
       onClick={onPick}
       disabled={isBusy || isRunning}
-      className="flex min-h-20 w-full flex-col items-start justify-center gap-1 rounded-xl border-2 border-graphite-400 bg-white px-5 py-3 text-left shadow-sm active:bg-graphite-200 disabled:border-felt disabled:bg-felt-light"
+      className="flex h-full min-h-20 w-full flex-col items-start justify-center gap-1 rounded-xl border-2 border-graphite-400 bg-white px-5 py-3 text-left shadow-sm active:bg-graphite-200 disabled:border-felt disabled:bg-felt-light"
     >
       <span className="text-wall-sm font-semibold">
         {task.title}

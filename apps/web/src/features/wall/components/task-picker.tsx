@@ -36,7 +36,7 @@ export function TaskPicker({ tasks, runningTaskId, isBusy, onPick }: TaskPickerP
       {assigned.length > 0 && (
         <section aria-labelledby="wall-own-tasks" className="space-y-3">
           <h4 id="wall-own-tasks" className="text-wall-sm font-bold">Your tasks</h4>
-          <ul className="space-y-3">{assigned.map(button)}</ul>
+          <ul className="grid gap-3 xl:grid-cols-2">{assigned.map(button)}</ul>
         </section>
       )}
       {others.length > 0 && (
@@ -45,7 +45,7 @@ export function TaskPicker({ tasks, runningTaskId, isBusy, onPick }: TaskPickerP
           {others.map((group) => (
             <div key={group.job.id} className="space-y-2">
               <h5 className="text-xl font-semibold text-graphite-700">{group.job.title}</h5>
-              <ul className="space-y-3">{group.tasks.map(button)}</ul>
+              <ul className="grid gap-3 xl:grid-cols-2">{group.tasks.map(button)}</ul>
             </div>
           ))}
         </section>

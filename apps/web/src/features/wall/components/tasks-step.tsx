@@ -21,7 +21,7 @@ export function TasksStep({ step, technician, waiting, now, isBusy, onClockOn, o
   const shown = shownRunning(running, mine);
   const runningTaskId = mine.at(-1)?.kind === 'clock-on' ? mine.at(-1)?.task?.id : mine.length === 0 ? running?.task.id : undefined;
   return (
-    <div className="mx-auto max-w-5xl space-y-6">
+    <div className="mx-auto max-w-7xl space-y-6">
       {step.isOffline && (
         <p role="status" className="rounded-xl bg-graphite-700 p-5 text-xl font-semibold text-white">
           No network. What you do now is kept on this screen and sent, with your PIN checked, once the network is back.

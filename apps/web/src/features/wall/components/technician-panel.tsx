@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useEffect, useId, useRef, useState } from 'react';
 import type { WallTechnician, WallTechnicianTasks } from '@keybed/shared';
 import { useNow } from '@/lib/use-now';
 import { isPinComplete } from '../lib/pin-pad';
@@ -45,6 +45,15 @@ export function TechnicianPanel(props: TechnicianPanelProps) {
   const session = useTechnicianSession(props);
   const [digits, setDigits] = useState('');
   const { secondsLeft, now } = useIdleClose(onClose, session.isBusy);
+  const heading = useRef<HTMLHeadingElement>(null);
+
+  // Focus starts in the panel; Escape closes it like the Close button.
+  useEffect(() => heading.current?.focus(), []);
+  useEffect(() => {
+    const onKey = (event: KeyboardEvent) => event.key === 'Escape' && onClose();
+    document.addEventListener('keydown', onKey);
+    return () => document.removeEventListener('keydown', onKey);
+  }, [onClose]);
 
   const enter = (next: string) => {
     setDigits(next);
@@ -57,7 +66,9 @@ export function TechnicianPanel(props: TechnicianPanelProps) {
   return (
     <div role="dialog" aria-modal="true" aria-labelledby={titleId} className="fixed inset-0 z-40 flex flex-col bg-paper text-ink">
       <header className="flex flex-wrap items-center gap-x-6 gap-y-2 border-b-4 border-graphite-300 bg-white px-6 py-3 lg:px-10">
-        <h2 id={titleId} className="text-wall font-bold">{technician.name}</h2>
+        <h2 id={titleId} ref={heading} tabIndex={-1} className="text-wall font-bold">
+          {technician.name}
+        </h2>
         <p className="ml-auto text-xl text-graphite-700 tabular-figures">Closes in {secondsLeft} s</p>
         <button type="button" onClick={() => onClose()} className="min-h-16 rounded-xl border-2 border-graphite-400 bg-white px-8 text-wall-sm font-semibold active:bg-graphite-200">
           Close

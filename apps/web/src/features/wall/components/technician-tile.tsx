@@ -7,6 +7,7 @@ import { lockedMinutes } from '../lib/wall-messages';
 
 interface TechnicianTileProps {
   technician: WallTechnician;
+  timeZone: string;
   shown: ShownRunning | null;
   /** Actions of theirs waiting on this screen. */
   waitingCount: number;
@@ -14,8 +15,11 @@ interface TechnicianTileProps {
   onOpen: () => void;
 }
 
+const clockTime = (iso: string, timeZone: string) =>
+  new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone }).format(new Date(iso));
+
 /** One person on the wall: what they are on and for how long. Tapping opens their PIN pad. */
-export function TechnicianTile({ technician, shown, waitingCount, now, onOpen }: TechnicianTileProps) {
+export function TechnicianTile({ technician, timeZone, shown, waitingCount, now, onOpen }: TechnicianTileProps) {
   const statusId = useId();
   const isLocked = technician.lockedUntil !== null && Date.parse(technician.lockedUntil) > now;
   const isRunning = shown !== null;
@@ -26,9 +30,9 @@ export function TechnicianTile({ technician, shown, waitingCount, now, onOpen }:
       aria-describedby={statusId}
       onClick={onOpen}
       className={cx(
-        'flex min-h-56 w-full flex-col items-start gap-2 rounded-xl border-4 p-6 text-left shadow-sm active:translate-y-px',
-        isRunning ? 'border-felt bg-felt text-white' : 'border-graphite-300 bg-white text-ink',
-        isLocked && 'border-damper',
+        'flex min-h-56 w-full flex-1 flex-col items-start gap-2 rounded-xl border-4 p-6 text-left shadow-sm active:translate-y-px',
+        isRunning ? 'bg-felt text-white' : 'bg-white text-ink',
+        isLocked ? 'border-damper' : isRunning ? 'border-felt' : 'border-graphite-300',
       )}
     >
       <span className="text-wall font-bold">{technician.name}</span>
@@ -40,6 +44,7 @@ export function TechnicianTile({ technician, shown, waitingCount, now, onOpen }:
             <span className="mt-auto flex flex-wrap items-baseline gap-x-4">
               <span className="sr-only">Clocked on for </span>
               <span className="text-wall-lg font-bold tabular-figures">{elapsedHoursMinutes(shown.startedAt, now)}</span>
+              <span className="text-xl tabular-figures">since {clockTime(shown.startedAt, timeZone)}</span>
             </span>
           </>
         ) : (

@@ -29,7 +29,7 @@ export function WaitingActions({ actions, timeZone, isDurable, onDismiss }: Wait
         aria-expanded={isOpen}
         aria-controls={listId}
         onClick={() => setIsOpen((open) => !open)}
-        className={cx('min-h-16 rounded-xl px-5 text-xl font-bold text-white', refused > 0 ? 'bg-damper' : 'bg-graphite-700')}
+        className={cx('min-h-16 rounded-xl px-5 text-xl font-bold', refused > 0 ? 'bg-damper text-white' : 'bg-spruce text-ink')}
       >
         {label}
       </button>

@@ -44,10 +44,15 @@ function PairedWall({ pairing }: { pairing: WallPairing }) {
   const [notice, setNotice] = useState<WallNotice | null>(null);
   const taskCache = useRef(new Map<string, WallTechnicianTasks>());
 
-  const close = useCallback((next?: WallNotice) => {
-    setOpenId(null);
-    if (next) setNotice(next);
-  }, []);
+  // A PIN lock or unlock sends no live event: read everyone afresh whenever a turn ends.
+  const close = useCallback(
+    (next?: WallNotice) => {
+      setOpenId(null);
+      if (next) setNotice(next);
+      void queryClient.invalidateQueries({ queryKey: wallKeys.technicians() });
+    },
+    [queryClient],
+  );
   const unpaired = useCallback(() => void queryClient.invalidateQueries({ queryKey: wallKeys.session() }), [queryClient]);
   const cacheTasks = useCallback((data: WallTechnicianTasks) => void taskCache.current.set(data.technician.id, data), []);
   const clearNotice = useCallback(() => setNotice(null), []);
@@ -56,35 +61,38 @@ function PairedWall({ pairing }: { pairing: WallPairing }) {
   const open = technicians.data?.find((t) => t.id === openId);
   return (
     <div className="flex min-h-dvh flex-col bg-paper text-ink">
-      <WallHeader pairing={pairing} now={now} isOnline={isOnline} isLive={isLive}>
-        <WaitingActions actions={queue.actions} timeZone={pairing.workshop.timeZone} isDurable={queue.isDurable} onDismiss={(key) => void queue.dismiss(key)} />
-      </WallHeader>
-      {!isOnline && (
-        <p role="status" className="bg-graphite-700 px-10 py-3 text-xl font-semibold text-white">
-          No network. Clock actions are kept on this screen and sent later.
-        </p>
-      )}
-      <main className="flex-1 px-6 py-6 pb-32 lg:px-10">
-        <h1 className="mb-4 text-wall-sm font-bold">Who is working · tap your name</h1>
-        {technicians.isPending ? (
-          <p role="status" className="text-wall-sm">Loading who is working…</p>
-        ) : technicians.isError && !technicians.data ? (
-          <p role="alert" className="text-wall-sm">{describeError(technicians.error).title} The screen keeps trying.</p>
-        ) : technicians.data.length === 0 ? (
-          <p className="text-wall-sm">Nobody clocks on here yet. Technicians appear once they join the workshop.</p>
-        ) : (
-          <ul aria-label="Technicians" className="grid grid-cols-[repeat(auto-fill,minmax(min(26rem,100%),1fr))] gap-5">
-            {technicians.data.map((t) => {
-              const waiting = waitingFor(queue.actions, t.id);
-              return (
-                <li key={t.id}>
-                  <TechnicianTile technician={t} shown={shownRunning(t.running, waiting)} waitingCount={waiting.length} now={now} onOpen={() => setOpenId(t.id)} />
-                </li>
-              );
-            })}
-          </ul>
+      {/* While a technician's panel is open, the home view behind it can be neither reached nor read. */}
+      <div inert={open !== undefined} className="flex flex-1 flex-col">
+        <WallHeader pairing={pairing} now={now} isOnline={isOnline} isLive={isLive}>
+          <WaitingActions actions={queue.actions} timeZone={pairing.workshop.timeZone} isDurable={queue.isDurable} onDismiss={(key) => void queue.dismiss(key)} />
+        </WallHeader>
+        {!isOnline && (
+          <p role="status" className="bg-graphite-700 px-10 py-3 text-xl font-semibold text-white">
+            No network. Clock actions are kept on this screen and sent later.
+          </p>
         )}
-      </main>
+        <main className="flex-1 px-6 py-6 pb-32 lg:px-10">
+          <h1 className="mb-4 text-wall-sm font-bold">Who is working · tap your name</h1>
+          {technicians.isPending ? (
+            <p role="status" className="text-wall-sm">Loading who is working…</p>
+          ) : technicians.isError && !technicians.data ? (
+            <p role="alert" className="text-wall-sm">{describeError(technicians.error).title} The screen keeps trying.</p>
+          ) : technicians.data.length === 0 ? (
+            <p className="text-wall-sm">Nobody clocks on here yet. Technicians appear once they join the workshop.</p>
+          ) : (
+            <ul aria-label="Technicians" className="grid grid-cols-[repeat(auto-fit,minmax(min(26rem,100%),1fr))] gap-5">
+              {technicians.data.map((t) => {
+                const waiting = waitingFor(queue.actions, t.id);
+                return (
+                  <li key={t.id} className="flex">
+                    <TechnicianTile technician={t} timeZone={pairing.workshop.timeZone} shown={shownRunning(t.running, waiting)} waitingCount={waiting.length} now={now} onOpen={() => setOpenId(t.id)} />
+                  </li>
+                );
+              })}
+            </ul>
+          )}
+        </main>
+      </div>
       <WallNoticeBar notice={notice} onGone={clearNotice} />
       {open && (
         <TechnicianPanel

@@ -14,6 +14,10 @@ describe('idleSecondsLeft', () => {
     expect(idleSecondsLeft(touched, touched + 29_001)).toBe(1);
   });
 
+  it('when the clock reading is a moment older than the last touch, then it still shows 30, not 31', () => {
+    expect(idleSecondsLeft(touched, touched - 200)).toBe(30);
+  });
+
   it('when 30 seconds or more have passed, then none are left', () => {
     expect(idleSecondsLeft(touched, touched + IDLE_LIMIT_MS)).toBe(0);
     expect(idleSecondsLeft(touched, touched + 90_000)).toBe(0);
