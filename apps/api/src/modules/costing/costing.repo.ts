@@ -100,19 +100,23 @@ export function createCostingRepo(db: Database) {
       const rows = await db.execute<{ id: string; job_id: string; title: string; status: TaskFact['status']; estimated_minutes: number | null; minutes: string; unrated: string; cost: string }>(sql`
         with ${scopeCte(workshopId, scope)},
         zone as (select time_zone from workshops where id = ${workshopId}),
-        entries as (
-          select e.task_id,
-            floor(extract(epoch from coalesce(e.ended_at, ${now.toISOString()}::timestamptz) - e.started_at) / 60)::bigint as minutes,
-            (select r.rate_minor_per_hour from technician_cost_rates r
-              where r.workshop_id = e.workshop_id and r.user_id = e.technician_id
-                and r.effective_from <= (e.started_at at time zone z.time_zone)::date
-              order by r.effective_from desc limit 1) as rate
-          from time_entries e join scope s on s.id = e.job_id cross join zone z),
+        -- Each rate's period as instants: from local midnight of its first day to that of the next
+        -- rate's, so an entry falls in the period of the local day it started on.
+        periods as (
+          select r.user_id, r.rate_minor_per_hour as rate,
+            (r.effective_from::timestamp at time zone z.time_zone) as from_at,
+            (lead(r.effective_from) over (partition by r.user_id order by r.effective_from))::timestamp at time zone z.time_zone as until_at
+          from technician_cost_rates r cross join zone z where r.workshop_id = ${workshopId}),
+        costed as (
+          select e.task_id, p.rate,
+            floor(extract(epoch from coalesce(e.ended_at, ${now.toISOString()}::timestamptz) - e.started_at) / 60)::bigint as minutes
+          from time_entries e join scope s on s.id = e.job_id
+          left join periods p on p.user_id = e.technician_id and e.started_at >= p.from_at and (p.until_at is null or e.started_at < p.until_at)),
         labour as (
           select task_id, sum(minutes) as minutes,
             sum(case when rate is null then minutes else 0 end) as unrated,
             sum(case when rate is null then 0 else (minutes * rate * 2 + 60) / 120 end) as cost
-          from entries group by task_id)
+          from costed group by task_id)
         select t.id, t.job_id, t.title, t.status, t.estimated_minutes,
           coalesce(l.minutes, 0)::text as minutes, coalesce(l.unrated, 0)::text as unrated, coalesce(l.cost, 0)::text as cost
         from tasks t join scope s on s.id = t.job_id left join labour l on l.task_id = t.id
