@@ -96,6 +96,27 @@ describe('GET /api/jobs/:id/costing', () => {
     expect(rebush.money).toEqual({ labourCostMinor: 5372, unratedMinutes: 30, partsCostMinor: 0, costToDateMinor: 5372 });
   });
 
+  it('when entries straddle local midnight in summer time, then each is costed by its London date, as labourCost says', async () => {
+    const other = await moneyWorkshop(t);
+    await addCostRate(other.owner.agent, other.priya.userId, '2026-01-05', 2400);
+    await addCostRate(other.owner.agent, other.priya.userId, '2026-04-01', 2600);
+    const job = await createJob(other.owner.agent);
+    const task = (await other.owner.agent.post(`/api/jobs/${job.id}/tasks`).send({ title: 'Regulate' }).expect(201)).body as Task;
+    const entries = [
+      { startedAt: '2026-03-31T22:00:00Z', endedAt: '2026-03-31T22:50:00Z' }, // 23:00 BST on 31 March: £24
+      { startedAt: '2026-03-31T23:10:00Z', endedAt: '2026-03-31T23:47:00Z' }, // 00:10 BST on 1 April: £26
+    ];
+    for (const e of entries) await insertEntry(t, { workshopId: other.workshopId, technicianId: other.priya.userId, taskId: task.id, jobId: job.id, ...e });
+    const expected = labourCost(
+      entries.map((e) => ({ technicianId: 'priya', startedAt: e.startedAt, minutes: (Date.parse(e.endedAt) - Date.parse(e.startedAt)) / 60_000 })),
+      { priya: [{ effectiveFrom: '2026-01-05', rateMinorPerHour: 2400 }, { effectiveFrom: '2026-04-01', rateMinorPerHour: 2600 }] },
+      LONDON,
+    );
+    expect(expected.entries.map((e) => e.rateMinorPerHour)).toEqual([2400, 2600]);
+    const costing = JobCosting.parse((await other.owner.agent.get(`/api/jobs/${job.id}/costing`).expect(200)).body);
+    expect(costing.money?.labourCostMinor).toBe(expected.costMinor); // 2000p + 1603.3p → 1603p
+  });
+
   it('when a later rate is added, then costs already incurred do not change', async () => {
     const before = (await w.owner.agent.get(`/api/jobs/${scene.salon.id}/costing`)).body.money.labourCostMinor;
     await addCostRate(w.owner.agent, w.priya.userId, '2026-06-01', 3000);
