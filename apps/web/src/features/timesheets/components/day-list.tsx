@@ -1,8 +1,7 @@
 import type { ReactNode } from 'react';
 import type { TimesheetWeek } from '@keybed/shared';
 import { formatHoursMinutes } from '@keybed/shared';
-import { cx } from '@/lib/cx';
-import { dayLabel, isWeekend } from '../lib/week';
+import { dayLabel } from '../lib/week';
 import type { TaskFieldProps } from './correction-form';
 import { EntryRow } from './entry-row';
 
@@ -21,7 +20,7 @@ export function DayList({ week, canCorrect, renderTaskField }: DayListProps) {
         const headingId = `day-${day.day}`;
         const isQuiet = day.entries.length === 0;
         return (
-          <section key={day.day} aria-labelledby={headingId} className={cx(isQuiet && isWeekend(day.day) && 'opacity-80')}>
+          <section key={day.day} aria-labelledby={headingId}>
             <h3 id={headingId} className="flex items-baseline justify-between gap-4 border-b-2 border-graphite-300 pb-1">
               <span className="font-semibold">{dayLabel(day.day)}</span>
               <span className="font-semibold tabular-figures">{formatHoursMinutes(day.minutes)}</span>

@@ -37,9 +37,6 @@ export function weekLabel(weekStart: string): string {
 /** "Monday 2 March" for a local day. */
 export const dayLabel = (dayKey: string) => weekdayDayMonth.format(utcDay(dayKey));
 
-/** Saturdays and Sundays are shown quieter. */
-export const isWeekend = (dayKey: string) => isoWeekday(dayKey) >= 6;
-
 /** "08:15": an instant's wall-clock time in the workshop's zone. */
 export function localClockTime(iso: string, timeZone: string): string {
   return new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone }).format(new Date(iso));

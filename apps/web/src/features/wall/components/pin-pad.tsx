@@ -1,4 +1,4 @@
-import { useEffect } from 'react';
+import { useEffect, useRef } from 'react';
 import { cx } from '@/lib/cx';
 import { PIN_LENGTH, pinPadKey, pressPinPad, type PinPadAction } from '../lib/pin-pad';
 
@@ -17,22 +17,30 @@ const keyClasses =
 
 /** Six masked dots and a large keypad; a keyboard works too (digits, Backspace, Delete, Enter). */
 export function PinPad({ pin, onChange, onSubmit, isBusy, message }: PinPadProps) {
+  // Keys can arrive faster than React renders: each press builds on the last one, not on the last render.
+  const current = useRef(pin);
+  current.current = pin;
   const press = (action: PinPadAction) => {
-    if (!isBusy) onChange(pressPinPad(pin, action));
+    const next = pressPinPad(current.current, action);
+    if (isBusy || next === current.current) return;
+    current.current = next;
+    onChange(next);
   };
+  const latest = useRef({ press, onSubmit });
+  latest.current = { press, onSubmit };
 
   useEffect(() => {
     function onKey(event: KeyboardEvent) {
-      if (isBusy || event.ctrlKey || event.metaKey || event.altKey) return;
+      if (event.ctrlKey || event.metaKey || event.altKey) return;
       const action = pinPadKey(event.key);
       if (!action) return;
       event.preventDefault();
-      if (action === 'submit') onSubmit();
-      else onChange(pressPinPad(pin, action));
+      if (action === 'submit') latest.current.onSubmit();
+      else latest.current.press(action);
     }
     document.addEventListener('keydown', onKey);
     return () => document.removeEventListener('keydown', onKey);
-  }, [pin, isBusy, onChange, onSubmit]);
+  }, []);
 
   return (
     <div className="mx-auto flex w-full max-w-md flex-col items-center gap-5 lg:max-w-xl">
