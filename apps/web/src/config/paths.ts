@@ -42,6 +42,17 @@ export const paths = {
   stagesSettings: { path: '/settings/stages', build: () => '/settings/stages' },
   wallScreensSettings: { path: '/settings/wall-screens', build: () => '/settings/wall-screens' },
   profile: { path: '/profile', build: () => '/profile' },
+  workshopSettings: { path: '/settings/workshop', build: () => '/settings/workshop' },
+  parts: {
+    path: '/parts',
+    build: (options: { q?: string; low?: 'true' } = {}) => withQuery('/parts', options),
+  },
+  newPart: { path: '/parts/new', build: () => '/parts/new' },
+  part: { path: '/parts/:id', build: (id: string) => `/parts/${encodeURIComponent(id)}` },
+  margins: {
+    path: '/margins',
+    build: (options: { from?: string; to?: string; status?: string } = {}) => withQuery('/margins', options),
+  },
   timesheets: {
     path: '/timesheets',
     build: (options: { technicianId?: string; weekStart?: string } = {}) => withQuery('/timesheets', options),

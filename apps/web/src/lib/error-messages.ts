@@ -36,6 +36,8 @@ const BY_CODE: Partial<Record<ErrorCode | ClientErrorCode, ErrorDescription>> = 
   task_not_open: { title: 'That task cannot be clocked on to.', action: 'It is done, or its job is not active. Choose an open task.' },
   not_running: { title: 'Nothing is running to clock off.', action: 'Reload to see who is on what now.' },
   week_approved: { title: 'That week is approved and locked.', action: 'Only the owner can change it now.' },
+  insufficient_stock: { title: 'There is not enough of that part in stock.', action: 'Receive the delivery first, or log a smaller quantity.' },
+  estimate_status: { title: 'The estimate cannot do that as it stands.', action: 'Reload to see where it stands: only a draft with lines can be issued, and only an issued estimate accepted or declined.' },
   internal: { title: 'Something went wrong on our side.', action: 'Try again. If it keeps happening, tell us the reference below.' },
   network_error: { title: 'Keybed could not be reached.', action: 'Check your connection, then try again.' },
   bad_response: { title: 'Keybed sent a reply this page does not understand.', action: 'Reload the page. If it keeps happening, tell us the reference below.' },

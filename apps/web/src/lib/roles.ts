@@ -27,3 +27,13 @@ export function canSuperviseBench(role: Role): boolean {
 export function canSetMemberPins(role: Role): boolean {
   return role === 'owner';
 }
+
+/** Owners and foremen see prices (estimates, sell prices, the charge-out rate); the API leaves them out for technicians. */
+export function canSeePrices(role: Role): boolean {
+  return role === 'owner' || role === 'foreman';
+}
+
+/** Only owners see costs, cost rates and margins; the API leaves them out for everyone else. */
+export function canSeeCosts(role: Role): boolean {
+  return role === 'owner';
+}

@@ -21,6 +21,7 @@ export function MainNav({ role, className }: { role: Role; className?: string })
               }
             >
               {item.label}
+              {item.Badge && <item.Badge />}
             </NavLink>
           </li>
         ))}
