@@ -100,6 +100,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   app.use(securityHeaders());
 
   const api = Router();
+  api.use(assessments.webhookRouter);
   api.use(express.json({ limit: '1mb' }));
   api.use(sameOriginOnly(config.appOrigin));
   api.use(healthRouter(sql));
