@@ -2,6 +2,7 @@ import { and, asc, count, eq, inArray, isNotNull, isNull } from 'drizzle-orm';
 import type { Database } from '../client';
 import { DEFAULT_STAGE_NAMES } from '@keybed/shared';
 import { clients, jobs, jobStageEvents, memberships, pianos, stages, users, workshops } from '../schema/index';
+import { seedAssessments } from './assessments';
 import { seedBench } from './bench';
 import { seedMoney } from './money';
 import { DEMO_CLIENTS, DEMO_JOBS, DEMO_MEMBERS, DEMO_PASSWORD, DEMO_PIANOS, DEMO_WORKSHOP, demoDate, demoInstant } from './demo';
@@ -40,6 +41,7 @@ export async function seedDemo(db: Database, hashPassword: (password: string) =>
     jobCount = await seedJobs(tx, idByEmail.get('tom@fennick.example') ?? null, now);
     await seedBench(tx, hashPassword, now);
     await seedMoney(tx, now);
+    await seedAssessments(tx, now);
   });
   const [workshop] = await db.select({ name: workshops.name }).from(workshops).where(eq(workshops.id, DEMO_WORKSHOP.id));
   return { workshop: workshop?.name ?? DEMO_WORKSHOP.name, members: DEMO_MEMBERS.length, jobs: jobCount };
