@@ -60,6 +60,7 @@ export function createRouter(queryClient: QueryClient) {
                 { path: paths.parts.path, lazy: lazy(() => import('./routes/parts')) },
                 { path: paths.newPart.path, lazy: lazy(() => import('./routes/new-part')) },
                 { path: paths.part.path, lazy: lazy(() => import('./routes/part')) },
+                { path: paths.margins.path, lazy: lazy(() => import('./routes/margins')) },
                 { path: paths.workshopSettings.path, lazy: lazy(() => import('./routes/workshop-settings')) },
                 { path: paths.profile.path, lazy: lazy(() => import('./routes/profile')) },
                 { path: paths.ivoryHelp.path, lazy: lazy(() => import('./routes/ivory-help')) },

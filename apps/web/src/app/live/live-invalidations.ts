@@ -3,8 +3,12 @@ import type { LiveEvent } from '@keybed/shared';
 import { benchKeys } from '@/features/bench/api/keys';
 import { boardKeys } from '@/features/board/api/keys';
 import { clientKeys } from '@/features/clients/api/keys';
+import { costingKeys } from '@/features/costing/api/keys';
+import { estimateKeys } from '@/features/estimates/api/keys';
 import { jobKeys } from '@/features/jobs/api/keys';
+import { partKeys } from '@/features/parts/api/keys';
 import { pianoKeys } from '@/features/pianos/api/keys';
+import { settingsKeys } from '@/features/settings/api/keys';
 import { stageKeys } from '@/features/stages/api/keys';
 import { taskKeys } from '@/features/tasks/api/keys';
 import { timesheetKeys } from '@/features/timesheets/api/keys';
@@ -29,11 +33,19 @@ export function keysFor(event: LiveEvent): QueryKey[] {
     case 'piano.changed':
       return [pianoKeys.detail(event.id), pianoKeys.lists(), clientKeys.details(), boardKeys.all, jobKeys.details()];
     case 'task.changed':
-      // Cards and the job page list the technicians with open tasks.
-      return [taskKeys.list(event.id), boardKeys.all, jobKeys.detail(event.id)];
+      // Cards and the job page list the technicians with open tasks; budgets feed the costing.
+      return [taskKeys.list(event.id), boardKeys.all, jobKeys.detail(event.id), costingKeys.job(event.id), costingKeys.reports()];
     case 'time.changed':
-      // Logged minutes show on tasks; who is on what on the job page; the technician's week.
-      return [benchKeys.running(), taskKeys.lists(), timesheetKeys.all];
+      // Logged minutes show on tasks, in costing and on the margins page; who is on what; the technician's week.
+      return [benchKeys.running(), taskKeys.lists(), timesheetKeys.all, costingKeys.all];
+    case 'estimate.changed':
+      return [estimateKeys.list(event.id), costingKeys.job(event.id), costingKeys.reports()];
+    case 'part.changed':
+      return [partKeys.detail(event.id), partKeys.lists(), partKeys.usedOnTasks()];
+    case 'costing.changed':
+      return [costingKeys.job(event.id), costingKeys.reports()];
+    case 'settings.changed':
+      return [settingsKeys.all, costingKeys.all];
     default:
       // A kind this build does not know yet: refresh the board, the page most likely open.
       return [boardKeys.all];
@@ -41,7 +53,20 @@ export function keysFor(event: LiveEvent): QueryKey[] {
 }
 
 /** After the stream was down, anything may have changed: refresh every board-related read. */
-export const keysAfterReconnect: QueryKey[] = [boardKeys.all, jobKeys.all, stageKeys.all, clientKeys.all, pianoKeys.all, taskKeys.all, benchKeys.all, timesheetKeys.all];
+export const keysAfterReconnect: QueryKey[] = [
+  boardKeys.all,
+  jobKeys.all,
+  stageKeys.all,
+  clientKeys.all,
+  pianoKeys.all,
+  taskKeys.all,
+  benchKeys.all,
+  timesheetKeys.all,
+  estimateKeys.all,
+  partKeys.all,
+  costingKeys.all,
+  settingsKeys.all,
+];
 
 export const isBoardKey = (key: QueryKey) => key[0] === boardKeys.all[0];
 export const boardMoveKey = boardKeys.moves();

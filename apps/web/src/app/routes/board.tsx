@@ -7,7 +7,9 @@ import { useSignedInMember } from '@/features/auth/hooks/use-signed-in-member';
 import { boardQueryOptions } from '@/features/board/api/get-board';
 import { BoardScreen } from '@/features/board/components/board-screen';
 import { filtersFromSearch } from '@/features/board/lib/board-filters';
-import { canRunBoard } from '@/lib/roles';
+import { CardIndicators, hasCardFigures } from '@/features/costing/components/card-indicators';
+import { useCardFigures } from '@/features/costing/hooks/use-card-figures';
+import { canRunBoard, canSeeCosts } from '@/lib/roles';
 import type { LayoutHandle } from './app-layout';
 
 export const handle: LayoutHandle = { isWide: true };
@@ -22,6 +24,7 @@ export const clientLoader =
 export function Component() {
   const me = useSignedInMember();
   const canRun = canRunBoard(me.role);
+  const figures = useCardFigures(canSeeCosts(me.role));
   return (
     <>
       <title>{`Board · ${me.workshop.name} · Keybed`}</title>
@@ -34,7 +37,10 @@ export function Component() {
         }
         actions={canRun ? <ButtonLink to={paths.newJob.build()}>New job</ButtonLink> : undefined}
       />
-      <BoardScreen canRunBoard={canRun} />
+      <BoardScreen canRunBoard={canRun} cardExtras={(job) => {
+          const f = figures.get(job.id);
+          return hasCardFigures(f) ? <CardIndicators figures={f} /> : undefined;
+        }} />
     </>
   );
 }

@@ -19,6 +19,7 @@ import { useStages } from '@/features/stages/api/get-stages';
 import { jobTasksQueryOptions } from '@/features/tasks/api/get-job-tasks';
 import { JobTasks } from '@/features/tasks/components/job-tasks';
 import { canRunBoard } from '@/lib/roles';
+import { CostingSection, EstimateSection, PartsUsedSection } from './job-estimate-and-costing';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -96,6 +97,24 @@ export function Component() {
             <h2 id="job-tasks-heading" className="text-lg font-semibold">Tasks</h2>
             <RegionBoundary>
               <TasksSection jobId={data.id} currentStage={isOnBoard ? data.history.at(-1)?.toStage : undefined} />
+            </RegionBoundary>
+          </section>
+          <section aria-labelledby="job-estimate-heading" className="space-y-3">
+            <h2 id="job-estimate-heading" className="text-lg font-semibold">Estimate</h2>
+            <RegionBoundary>
+              <EstimateSection job={data} />
+            </RegionBoundary>
+          </section>
+          <section aria-labelledby="job-parts-heading" className="space-y-3">
+            <h2 id="job-parts-heading" className="text-lg font-semibold">Parts used</h2>
+            <RegionBoundary>
+              <PartsUsedSection job={data} />
+            </RegionBoundary>
+          </section>
+          <section aria-labelledby="job-costing-heading" className="space-y-3">
+            <h2 id="job-costing-heading" className="text-lg font-semibold">Costing</h2>
+            <RegionBoundary>
+              <CostingSection job={data} />
             </RegionBoundary>
           </section>
           <section aria-labelledby="job-details-heading" className="space-y-3">

@@ -1,4 +1,5 @@
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
+import type { Job } from '@keybed/shared';
 import { useSearchParams } from 'react-router-dom';
 import { ErrorState } from '@/components/error-state';
 import { todayKey } from '@/lib/format';
@@ -11,8 +12,14 @@ import { BoardToolbar } from './board-toolbar';
 import { MovableBoard } from './movable-board';
 import { StaticBoard } from './static-board';
 
+interface BoardScreenProps {
+  canRunBoard: boolean;
+  /** What a card shows in its footer beside the technicians (hours and money indicators). */
+  cardExtras?: (job: Job) => ReactNode;
+}
+
 /** The live board: filters from the URL, one column per active stage, cards that move for runners. */
-export function BoardScreen({ canRunBoard }: { canRunBoard: boolean }) {
+export function BoardScreen({ canRunBoard, cardExtras }: BoardScreenProps) {
   const [params, setParams] = useSearchParams();
   const filters = useMemo(() => filtersFromSearch(params), [params]);
   const board = useBoard(filters);
@@ -22,7 +29,7 @@ export function BoardScreen({ canRunBoard }: { canRunBoard: boolean }) {
 
   const data = board.data;
   const jobTotal = data?.stages.reduce((sum, s) => sum + s.jobCount, 0) ?? 0;
-  const props = data ? { board: data, unit, today, isFiltered } : undefined;
+  const props = data ? { board: data, unit, today, isFiltered, cardExtras } : undefined;
 
   return (
     <>

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { DndContext, DragOverlay, KeyboardSensor, TouchSensor, useSensor, useSensors } from '@dnd-kit/core';
 import type { Board, Job } from '@keybed/shared';
 import { RegionBoundary } from '@/components/region-boundary';
@@ -30,10 +30,11 @@ interface MovableBoardProps {
   unit: PreferredLengthUnit;
   today: string;
   isFiltered: boolean;
+  cardExtras?: ((job: Job) => ReactNode) | undefined;
 }
 
 /** The board for owners and foremen: cards move by mouse, touch and keyboard. */
-export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardProps) {
+export function MovableBoard({ board, unit, today, isFiltered, cardExtras }: MovableBoardProps) {
   const move = useMoveJob();
   const isReducedMotion = usePrefersReducedMotion();
   const [held, setHeld] = useState<{ drop: Drop; view: HeldMove } | null>(null);
@@ -97,7 +98,7 @@ export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardPro
             >
               {cardIds.map((id) => {
                 const job = jobsById.get(id);
-                return job ? <SortableJobCard key={id} job={job} stageId={stage.id} unit={unit} today={today} /> : null;
+                return job ? <SortableJobCard key={id} job={job} stageId={stage.id} unit={unit} today={today} footerExtras={cardExtras?.(job)} /> : null;
               })}
             </DroppableStageColumn>
           </RegionBoundary>
@@ -105,7 +106,7 @@ export function MovableBoard({ board, unit, today, isFiltered }: MovableBoardPro
       })}
       <DragOverlay dropAnimation={isReducedMotion ? null : { duration: 150 }}>
         {/* Not rotated or scaled: keyboard moves measure the lifted card against the others. */}
-        {activeJob && <JobCard job={activeJob} unit={unit} today={today} handle={<GripMark />} isOverlay className="shadow-lg" />}
+        {activeJob && <JobCard job={activeJob} unit={unit} today={today} handle={<GripMark />} footerExtras={cardExtras?.(activeJob)} isOverlay className="shadow-lg" />}
       </DragOverlay>
       <WipConfirmDialog
         held={held?.view ?? null}

@@ -1,4 +1,5 @@
-import type { Board } from '@keybed/shared';
+import type { ReactNode } from 'react';
+import type { Board, Job } from '@keybed/shared';
 import { RegionBoundary } from '@/components/region-boundary';
 import type { PreferredLengthUnit } from '@/lib/length-unit';
 import { JobCard } from './job-card';
@@ -9,10 +10,11 @@ interface StaticBoardProps {
   unit: PreferredLengthUnit;
   today: string;
   isFiltered: boolean;
+  cardExtras?: ((job: Job) => ReactNode) | undefined;
 }
 
 /** The board to read (technicians): the same columns and cards, nothing to drag. */
-export function StaticBoard({ board, unit, today, isFiltered }: StaticBoardProps) {
+export function StaticBoard({ board, unit, today, isFiltered, cardExtras }: StaticBoardProps) {
   return (
     <>
       {board.stages.map((stage) => (
@@ -20,7 +22,7 @@ export function StaticBoard({ board, unit, today, isFiltered }: StaticBoardProps
           <StageColumn stage={stage} cardCount={stage.jobs.length} isFiltered={isFiltered}>
             {stage.jobs.map((job) => (
               <li key={job.id}>
-                <JobCard job={job} unit={unit} today={today} />
+                <JobCard job={job} unit={unit} today={today} footerExtras={cardExtras?.(job)} />
               </li>
             ))}
           </StageColumn>

@@ -1,0 +1,47 @@
+import { ESTIMATE_LINE_KINDS, type EstimateLineKind } from '@keybed/shared';
+import { Button } from '@/components/button';
+import { LINE_KIND_LABELS, type LineDraft } from '../lib/estimate-draft';
+import { LineEditor, type LineEditorContext } from './line-editor';
+
+interface LineGroupProps extends LineEditorContext {
+  /** Every line of the estimate: numbering and errors follow the whole list. */
+  allLines: readonly LineDraft[];
+  optionKey: string | null;
+  /** Names the group in the add buttons ("to New hammers"). */
+  groupName: string;
+  amounts: Map<string, number | null>;
+  onChange: (uid: string, changes: Partial<LineDraft>) => void;
+  onRemove: (uid: string) => void;
+  onAdd: (kind: EstimateLineKind, optionKey: string | null) => void;
+}
+
+/** The lines of one group (always included, or one option) and buttons to add more. */
+export function LineGroup({ allLines, optionKey, groupName, amounts, onChange, onRemove, onAdd, ...ctx }: LineGroupProps) {
+  const lines = allLines.flatMap((line, index) => (line.optionKey === optionKey ? [{ line, number: index + 1 }] : []));
+  return (
+    <div className="space-y-2">
+      {lines.length === 0 && <p className="text-sm text-graphite-600">No lines here yet.</p>}
+      {lines.map(({ line, number }) => (
+        <LineEditor
+          key={line.uid}
+          line={line}
+          number={number}
+          amountMinor={amounts.get(line.uid) ?? null}
+          onChange={(changes) => onChange(line.uid, changes)}
+          onRemove={() => onRemove(line.uid)}
+          {...ctx}
+        />
+      ))}
+      <div className="flex flex-wrap items-center gap-2">
+        <span className="text-sm font-semibold text-graphite-700" aria-hidden="true">
+          Add:
+        </span>
+        {ESTIMATE_LINE_KINDS.map((kind) => (
+          <Button key={kind} size="sm" variant="secondary" aria-label={`Add a ${LINE_KIND_LABELS[kind].toLowerCase()} line to ${groupName}`} onClick={() => onAdd(kind, optionKey)}>
+            + {LINE_KIND_LABELS[kind]}
+          </Button>
+        ))}
+      </div>
+    </div>
+  );
+}
