@@ -7,7 +7,7 @@ import { ROOT } from './lib/stack.mjs';
 await ensureDeps(ROOT);
 const { startCluster, clusterBase } = await import('./lib/postgres.mjs');
 const { startMailbox } = await import('./lib/mail.mjs');
-const { buildAll, onShutdown, prepareDatabase, startServer } = await import('./lib/stack.mjs');
+const { buildAll, onShutdown, prepareDatabase, startPayments, startServer } = await import('./lib/stack.mjs');
 const { DEMO_MEMBERS, DEMO_PASSWORD } = await import('./lib/demo-sign-ins.mjs');
 
 const port = Number(process.env.PORT ?? 3000);
@@ -23,8 +23,10 @@ try {
   await prepareDatabase(databaseUrl);
   const mail = await startMailbox({ root: ROOT, smtpPort: 1025, webPort: 1080, logFile: path.join(clusterBase(ROOT), 'mail.log') });
   stops.push(() => mail.stop());
+  const payments = await startPayments({ appPort: port });
+  stops.push(() => payments.stop());
   await buildAll();
-  const server = await startServer({ port, env: { DATABASE_URL: databaseUrl, SMTP_PORT: String(mail.smtpPort) } });
+  const server = await startServer({ port, env: { DATABASE_URL: databaseUrl, SMTP_PORT: String(mail.smtpPort), ...payments.env } });
   stops.push(() => server.stop());
   server.child.once('exit', (code) => {
     say(`The server stopped (${code}); stopping the rest.`);
@@ -35,6 +37,7 @@ try {
   console.log(`
   Keybed is running:   http://localhost:${port}
   Mail inbox (fake):   ${mail.inboxUrl}
+  Card payments (fake): ${payments.url}
   Database:            ${databaseUrl}
 
   Demo sign-ins (password: ${DEMO_PASSWORD}):

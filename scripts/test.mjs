@@ -11,7 +11,7 @@ const { aptInstall } = await import('./lib/apt.mjs');
 const { startCluster, clusterBase } = await import('./lib/postgres.mjs');
 const { startMailbox } = await import('./lib/mail.mjs');
 const { findFreePort, run } = await import('./lib/proc.mjs');
-const { buildAll, onShutdown, prepareDatabase, startServer } = await import('./lib/stack.mjs');
+const { buildAll, onShutdown, prepareDatabase, startPayments, startServer } = await import('./lib/stack.mjs');
 
 const CHROMIUM = '/usr/bin/chromium';
 const reports = path.join(ROOT, '.data', 'reports');
@@ -75,9 +75,11 @@ try {
     const databaseUrl = cluster.url('keybed_e2e');
     await prepareDatabase(databaseUrl);
     const port = await findFreePort(43100);
+    const payments = await startPayments({ appPort: port, port: 43200 });
+    stops.push(() => payments.stop());
     const server = await startServer({
       port,
-      env: { DATABASE_URL: databaseUrl, SMTP_PORT: String(mail.smtpPort), LOG_LEVEL: 'warn', SIGN_IN_FAILURES_PER_ADDRESS: '1000' },
+      env: { DATABASE_URL: databaseUrl, SMTP_PORT: String(mail.smtpPort), LOG_LEVEL: 'warn', SIGN_IN_FAILURES_PER_ADDRESS: '1000', UPLOAD_DIR: path.join(clusterBase(ROOT), 'e2e-uploads'), ...payments.env },
     });
     stops.push(() => server.stop());
     await run(path.join(ROOT, 'node_modules/.bin/playwright'), ['test', '-c', 'e2e/playwright.config.ts', '--reporter=list,json'], {

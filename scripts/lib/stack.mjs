@@ -45,6 +45,36 @@ export async function startServer({ port, env }) {
   return server;
 }
 
+const PAYMENT_KEY = 'sk_test_keybed_local';
+const WEBHOOK_SECRET = 'whsec_keybed_local';
+
+/**
+ * The local fake card-payment server (scripts/fakes/payments.mjs) for the app on `appPort`;
+ * answers it with the environment that points the API's payment SDK at it.
+ */
+export async function startPayments({ appPort, port = 12111 }) {
+  const { startFakePayments } = await import('../fakes/payments.mjs');
+  const { findFreePort } = await import('./proc.mjs');
+  const fake = await startFakePayments({
+    port: await findFreePort(port),
+    webhookUrl: `http://127.0.0.1:${appPort}/api/webhooks/payments`,
+    webhookSecret: WEBHOOK_SECRET,
+    apiKey: PAYMENT_KEY,
+  });
+  say(`Fake payment server: ${fake.url}`);
+  return {
+    url: fake.url,
+    stop: () => fake.stop(),
+    env: {
+      STRIPE_SECRET_KEY: PAYMENT_KEY,
+      STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+      STRIPE_API_HOST: fake.host,
+      STRIPE_API_PORT: String(fake.port),
+      STRIPE_API_PROTOCOL: 'http',
+    },
+  };
+}
+
 /** Runs `cleanup` once on Ctrl-C / SIGTERM, then exits. */
 export function onShutdown(cleanup) {
   let isStopping = false;
