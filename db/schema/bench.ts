@@ -122,6 +122,34 @@ export const wallDevices = pgTable(
   ],
 );
 
+/**
+ * A clock grant from a PIN check at a wall screen: lets that screen send, without the PIN, the
+ * clock actions the technician made in that PIN session while the network was down. Only the
+ * SHA-256 of its token is stored. Device and technician stay in the grant's workshop (composite
+ * keys); the grant goes with either. It lasts 24 hours from issue; a PIN change or lock deletes it.
+ */
+export const wallClockGrants = pgTable(
+  'wall_clock_grants',
+  {
+    id: id(),
+    workshopId: workshopId(),
+    deviceId: uuid().notNull(),
+    technicianId: uuid().notNull(),
+    tokenHash: text().notNull(),
+    issuedAt: instant().notNull(),
+    expiresAt: instant().notNull(),
+  },
+  (t) => [
+    unique('wall_clock_grants_token_hash').on(t.tokenHash),
+    foreignKey({ name: 'wall_clock_grants_device_same_workshop', columns: [t.deviceId, t.workshopId], foreignColumns: [wallDevices.id, wallDevices.workshopId] }).onDelete('cascade'),
+    foreignKey({ name: 'wall_clock_grants_technician_same_workshop', columns: [t.workshopId, t.technicianId], foreignColumns: [memberships.workshopId, memberships.userId] }).onDelete('cascade'),
+    check('wall_clock_grants_lasts_24_hours', sql`${t.expiresAt} = ${t.issuedAt} + interval '24 hours'`),
+    check('wall_clock_grants_token_hash_sha256', sql`${t.tokenHash} ~ '^[0-9a-f]{64}$'`),
+    index().on(t.workshopId, t.technicianId),
+    index().on(t.deviceId),
+  ],
+);
+
 export const securityEventKindEnum = pgEnum('security_event_kind', [
   'pin_failed',
   'pin_locked',

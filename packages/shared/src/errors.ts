@@ -25,6 +25,8 @@ export const ERROR_CODES = [
   /** The wall screen's device session is missing, revoked, or refused after too many wrong PINs. */
   'wall_not_paired',
   'wall_pin_limit',
+  /** A clock grant that is unknown, for another screen or technician, expired, ended by a PIN change or lock, or for a time it does not cover. */
+  'grant_refused',
   /** Clocking on to a task that is done or on a job that is not active. */
   'task_not_open',
   /** Clocking off when nothing runs. */

@@ -33,6 +33,7 @@ const BY_CODE: Partial<Record<ErrorCode | ClientErrorCode, ErrorDescription>> = 
   pin_not_set: { title: 'No PIN has been set yet.', action: 'Set a 6-digit PIN on your profile, or ask the owner to set one.' },
   wall_not_paired: { title: 'This browser is not paired as the wall screen.', action: 'An owner or foreman can pair it from Wall screen settings.' },
   wall_pin_limit: { title: 'Too many wrong PINs on this screen in the last hour.', action: 'Wait a while, or ask an owner or foreman.' },
+  grant_refused: { title: 'This screen could not send that clock action by itself.', action: 'Enter your PIN here to send it.' },
   task_not_open: { title: 'That task cannot be clocked on to.', action: 'It is done, or its job is not active. Choose an open task.' },
   not_running: { title: 'Nothing is running to clock off.', action: 'Reload to see who is on what now.' },
   week_approved: { title: 'That week is approved and locked.', action: 'Only the owner can change it now.' },

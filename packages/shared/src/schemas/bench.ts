@@ -331,7 +331,7 @@ export const WallTask = z.object({
 });
 export type WallTask = z.infer<typeof WallTask>;
 
-/** `POST /api/wall/technicians/:id/verify-pin` answers the technician's open tasks. */
+/** The technician's open tasks and what they are on, as the wall shows them after a PIN check. */
 export const WallTechnicianTasks = z.object({
   technician: PersonRef,
   running: RunningEntry.nullable(),
@@ -339,8 +339,39 @@ export const WallTechnicianTasks = z.object({
 });
 export type WallTechnicianTasks = z.infer<typeof WallTechnicianTasks>;
 
-/** Every wall action names the technician and carries the PIN they just entered. */
-export const WallClockOnInput = ClockOnInput.extend({ technicianId: Id, pin: Pin });
+/** How long a clock grant can be sent, and the span after its PIN check that it covers. */
+export const WALL_GRANT_HOURS = 24;
+export const WALL_GRANT_WINDOW_MINUTES = 5;
+
+/**
+ * A clock grant: what lets the screen send, later and without the PIN, the clock actions a
+ * technician made in the PIN session it came from (while the network was down). It works only
+ * from the screen it was given to, for that technician, for actions whose `at` lies within
+ * WALL_GRANT_WINDOW_MINUTES of `issuedAt`, until `expiresAt`. A PIN change or lock ends it.
+ */
+export const WallClockGrant = z.object({ token: z.string(), issuedAt: z.string(), expiresAt: z.string() });
+export type WallClockGrant = z.infer<typeof WallClockGrant>;
+
+/** `POST /api/wall/technicians/:id/verify-pin` answers the technician's open tasks and a clock grant. */
+export const WallPinCheck = WallTechnicianTasks.extend({ grant: WallClockGrant });
+export type WallPinCheck = z.infer<typeof WallPinCheck>;
+
+const GrantToken = z.string({ error: 'The grant is not valid' }).regex(/^[A-Za-z0-9_-]{32,128}$/, { error: 'The grant is not valid' });
+
+/** Exactly one of `pin` and `grant`: a clear field error on both when neither or both come. */
+function pinOrGrant(v: { pin?: string | undefined; grant?: string | undefined }, ctx: z.core.$RefinementCtx) {
+  if (v.pin !== undefined && v.grant !== undefined) {
+    ctx.addIssue({ code: 'custom', path: ['grant'], message: 'Send the PIN or a grant, not both' });
+  } else if (v.pin === undefined && v.grant === undefined) {
+    for (const path of ['pin', 'grant']) ctx.addIssue({ code: 'custom', path: [path], message: 'Enter the 6-digit PIN, or send the grant from the PIN check' });
+  }
+}
+
+/**
+ * Every wall action names the technician and carries either the PIN they just entered or, for an
+ * action kept on the screen while the network was down, the grant from their PIN check.
+ */
+export const WallClockOnInput = ClockOnInput.extend({ technicianId: Id, pin: Pin.optional(), grant: GrantToken.optional() }).superRefine(pinOrGrant);
 export type WallClockOnInput = z.infer<typeof WallClockOnInput>;
-export const WallClockOffInput = ClockOffInput.extend({ technicianId: Id, pin: Pin });
+export const WallClockOffInput = ClockOffInput.extend({ technicianId: Id, pin: Pin.optional(), grant: GrantToken.optional() }).superRefine(pinOrGrant);
 export type WallClockOffInput = z.infer<typeof WallClockOffInput>;

@@ -1,6 +1,6 @@
-import { and, asc, count, eq, gt, min, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, eq, gt, lte, min, sql, type SQL } from 'drizzle-orm';
 import type { Database } from '@keybed/db/client';
-import { memberships, securityEvents, users, wallDevices } from '@keybed/db/schema';
+import { memberships, securityEvents, users, wallClockGrants, wallDevices } from '@keybed/db/schema';
 import type { Tx } from '../auth/auth.repo';
 
 type Db = Database | Tx;
@@ -57,6 +57,33 @@ export function createPinsRepo(db: Database) {
 
     /** Locks the device row so that one screen's PIN checks run one after another (the hourly cap stays exact). */
     lockDevice: (tx: Tx, deviceId: string) => tx.select({ id: wallDevices.id }).from(wallDevices).where(eq(wallDevices.id, deviceId)).for('update'),
+
+    /** Stores a clock grant (its token's hash only) and drops the technician's expired ones. */
+    async insertGrant(tx: Tx, values: typeof wallClockGrants.$inferInsert) {
+      await tx.delete(wallClockGrants).where(and(eq(wallClockGrants.workshopId, values.workshopId), eq(wallClockGrants.technicianId, values.technicianId), lte(wallClockGrants.expiresAt, values.issuedAt)));
+      await tx.insert(wallClockGrants).values(values);
+    },
+
+    /** Ends every clock grant of the technician (their PIN changed or was locked). */
+    deleteGrants: (tx: Tx, workshopId: string, technicianId: string) =>
+      tx.delete(wallClockGrants).where(and(eq(wallClockGrants.workshopId, workshopId), eq(wallClockGrants.technicianId, technicianId))),
+
+    /** The grant holding this token hash, with whether its screen is revoked. */
+    async findGrant(tx: Tx, tokenHash: string) {
+      const [row] = await tx
+        .select({
+          workshopId: wallClockGrants.workshopId,
+          deviceId: wallClockGrants.deviceId,
+          technicianId: wallClockGrants.technicianId,
+          issuedAt: wallClockGrants.issuedAt,
+          expiresAt: wallClockGrants.expiresAt,
+          deviceRevokedAt: wallDevices.revokedAt,
+        })
+        .from(wallClockGrants)
+        .innerJoin(wallDevices, and(eq(wallDevices.id, wallClockGrants.deviceId), eq(wallDevices.workshopId, wallClockGrants.workshopId)))
+        .where(eq(wallClockGrants.tokenHash, tokenHash));
+      return row;
+    },
 
     /** Wrong PINs sent from a device since `since`, and the oldest of them. */
     async deviceFailuresSince(tx: Tx, deviceId: string, since: Date) {

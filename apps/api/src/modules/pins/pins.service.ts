@@ -1,8 +1,20 @@
-import { PIN_FAILURES_BEFORE_LOCK, PIN_LOCK_MINUTES, type BenchTechnician, type PinStatus, type SetMemberPinInput, type SetOwnPinInput } from '@keybed/shared';
+import {
+  PIN_FAILURES_BEFORE_LOCK,
+  PIN_LOCK_MINUTES,
+  WALL_GRANT_HOURS,
+  WALL_GRANT_WINDOW_MINUTES,
+  type BenchTechnician,
+  type PinStatus,
+  type SetMemberPinInput,
+  type SetOwnPinInput,
+  type WallClockGrant,
+} from '@keybed/shared';
 import type { AuthContext, WallContext } from '../../http/context';
 import { AppError, notFound } from '../../http/errors';
 import type { Logger } from '../../lib/logger';
 import { hashPassword, verifyPassword } from '../../lib/password';
+import { hashLinkToken, newLinkToken } from '../../lib/tokens';
+import type { Tx } from '../auth/auth.repo';
 import type { PinMember, PinsRepo } from './pins.repo';
 
 interface Deps {
@@ -15,6 +27,8 @@ interface Deps {
 
 const HOUR_MS = 3600_000;
 const LOCK_MS = PIN_LOCK_MINUTES * 60_000;
+const GRANT_MS = WALL_GRANT_HOURS * HOUR_MS;
+const GRANT_WINDOW_MS = WALL_GRANT_WINDOW_MINUTES * 60_000;
 const minutesUntil = (until: Date, now: Date) => Math.max(1, Math.ceil((until.getTime() - now.getTime()) / 60_000));
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
@@ -30,7 +44,11 @@ const lockedError = (name: string, until: Date, now: Date) => {
 };
 
 /** What a PIN check at the wall came to; failures are written to the database before they are thrown. */
-type Outcome = { member: PinMember } | { error: AppError; log?: { msg: string; membershipId?: string; failedCount?: number } };
+type Outcome = { member: PinMember; grant?: WallClockGrant } | { error: AppError; log?: { msg: string; membershipId?: string; failedCount?: number } };
+
+/** Why a clock grant was refused: the words the screen shows, and a reason for the log (never the token). */
+const grantRefused = (message: string, fields?: Record<string, string[]>) => new AppError('grant_refused', 403, message, fields);
+const NOT_THIS_GRANT = 'This grant is not valid for this screen and technician. Enter the PIN to send the action.';
 
 const toStatus = (m: PinMember, now: Date): PinStatus => ({
   hasPin: m.pinHash !== null,
@@ -54,7 +72,12 @@ export function createPinsService({ repo, logger, now, devicePerHour }: Deps) {
     return new AppError('wall_pin_limit', 429, `Too many wrong PINs on this screen in the last hour. Try again in ${plural(minutes, 'minute')}, or ask an owner or foreman.`);
   }
 
-  async function verify(wall: WallContext, technicianId: string, pin: string): Promise<Outcome> {
+  /**
+   * Checks the PIN in one transaction under the member's row lock; with `withGrant`, a right PIN
+   * also stores a clock grant for this screen and technician in that transaction, so a PIN change
+   * or lock committed meanwhile (which deletes grants under the same lock) cannot be outrun.
+   */
+  async function verify(wall: WallContext, technicianId: string, pin: string, withGrant = false): Promise<Outcome> {
     return repo.transaction(async (tx): Promise<Outcome> => {
       const at = now();
       const capped = await checkDeviceCap(tx, wall, at);
@@ -67,7 +90,11 @@ export function createPinsService({ repo, logger, now, devicePerHour }: Deps) {
       if (member.pinLockedUntil && member.pinLockedUntil > at) return { error: lockedError(member.name, member.pinLockedUntil, at) };
       if (await verifyPassword(member.pinHash, pin)) {
         if (member.pinFailedCount > 0 || member.pinLockedUntil) await repo.setFailures(tx, member.membershipId, 0, null);
-        return { member };
+        if (!withGrant) return { member };
+        const { token, tokenHash } = newLinkToken();
+        const expiresAt = new Date(at.getTime() + GRANT_MS);
+        await repo.insertGrant(tx, { workshopId: wall.workshopId, deviceId: wall.deviceId, technicianId: member.userId, tokenHash, issuedAt: at, expiresAt });
+        return { member, grant: { token, issuedAt: at.toISOString(), expiresAt: expiresAt.toISOString() } };
       }
       const failed = member.pinFailedCount + 1;
       const event = { workshopId: wall.workshopId, membershipId: member.membershipId, deviceId: wall.deviceId, at };
@@ -77,6 +104,7 @@ export function createPinsService({ repo, logger, now, devicePerHour }: Deps) {
       if (failed >= PIN_FAILURES_BEFORE_LOCK) {
         const until = new Date(at.getTime() + LOCK_MS);
         await repo.setFailures(tx, member.membershipId, 0, until);
+        await repo.deleteGrants(tx, wall.workshopId, member.userId);
         await repo.recordEvent(tx, { ...event, kind: 'pin_locked', detail: { minutes: PIN_LOCK_MINUTES } });
         return { error: lockedError(member.name, until, at), log: { msg: 'technician PIN locked after wrong PINs', membershipId: member.membershipId, failedCount: failed } };
       }
@@ -94,20 +122,56 @@ export function createPinsService({ repo, logger, now, devicePerHour }: Deps) {
     await repo.transaction(async (tx) => {
       const at = now();
       await repo.setPin(tx, target.membershipId, pinHash, at);
+      await repo.deleteGrants(tx, workshopId, target.userId);
       await repo.recordEvent(tx, { workshopId, membershipId: target.membershipId, actorUserId, kind: 'pin_set', at });
     });
+  }
+
+  function settled(wall: WallContext, outcome: Outcome) {
+    if ('member' in outcome) return outcome;
+    if (outcome.log) {
+      const { msg, ...fields } = outcome.log;
+      logger.warn({ workshopId: wall.workshopId, deviceId: wall.deviceId, ...fields }, msg);
+    }
+    throw outcome.error;
   }
 
   return {
     /** Checks the technician's PIN at a wall screen; answers the member, or throws after recording the failure. */
     async verifyAtWall(wall: WallContext, technicianId: string, pin: string): Promise<PinMember> {
-      const outcome = await verify(wall, technicianId, pin);
-      if ('member' in outcome) return outcome.member;
-      if (outcome.log) {
-        const { msg, ...fields } = outcome.log;
-        logger.warn({ workshopId: wall.workshopId, deviceId: wall.deviceId, ...fields }, msg);
+      return settled(wall, await verify(wall, technicianId, pin)).member;
+    },
+
+    /** Checks the PIN like `verifyAtWall`; a right one also answers a new clock grant for this screen. */
+    async grantAtWall(wall: WallContext, technicianId: string, pin: string): Promise<{ member: PinMember; grant: WallClockGrant }> {
+      const { member, grant } = settled(wall, await verify(wall, technicianId, pin, true));
+      return { member, grant: grant! };
+    },
+
+    /**
+     * Accepts a clock grant for an action at `at` (now when absent), inside the action's own
+     * transaction after the technician's row is locked; throws `grant_refused` otherwise. A grant
+     * serves only the screen and technician it was given to, until it expires, while the screen is
+     * paired, and only for an action made within WALL_GRANT_WINDOW_MINUTES of its PIN check.
+     */
+    async checkGrant(tx: Tx, wall: WallContext, technicianId: string, token: string, at: string | undefined) {
+      const grant = await repo.findGrant(tx, hashLinkToken(token));
+      const refuse = (reason: string, error: AppError) => {
+        logger.warn({ workshopId: wall.workshopId, deviceId: wall.deviceId, technicianId, reason }, 'wall clock grant refused');
+        return error;
+      };
+      if (!grant || grant.workshopId !== wall.workshopId || grant.deviceId !== wall.deviceId || grant.technicianId !== technicianId) {
+        throw refuse(grant ? 'another screen or technician' : 'unknown or ended', grantRefused(NOT_THIS_GRANT));
       }
-      throw outcome.error;
+      if (grant.deviceRevokedAt) throw refuse('screen unpaired', grantRefused('This wall screen was unpaired; its grants no longer work.'));
+      const nowAt = now();
+      if (grant.expiresAt <= nowAt) throw refuse('expired', grantRefused('This grant has expired. Enter the PIN to send the action.'));
+      const atMs = at === undefined ? nowAt.getTime() : Date.parse(at);
+      const from = grant.issuedAt.getTime();
+      if (atMs < from || atMs > from + GRANT_WINDOW_MS) {
+        const message = `A grant covers only actions made within ${WALL_GRANT_WINDOW_MINUTES} minutes of the PIN check it came from. Enter the PIN to send this action.`;
+        throw refuse('time outside its window', grantRefused(message, { at: [message] }));
+      }
     },
 
     /** A member sets their own PIN, confirming with their account password. */

@@ -15,6 +15,11 @@ export interface ClockActor {
   byUserId: string;
   source: 'wall' | 'web';
   deviceId?: string | null;
+  /**
+   * Runs first in the action's transaction, once the technician's row is locked, and throws to
+   * refuse: a wall screen's clock grant is checked here, so a PIN change cannot slip in between.
+   */
+  authorise?: ((tx: Tx) => Promise<void>) | undefined;
 }
 
 /** `isNew` is false when nothing changed: a replayed key or the task already running. */
@@ -66,6 +71,7 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
 
   async function lockActiveTechnician(tx: Tx, actor: ClockActor) {
     const member = await repo.lockTechnician(tx, actor.workshopId, actor.technicianId);
+    if (actor.authorise) await actor.authorise(tx);
     if (!member?.isActive) throw notFound('That technician');
     return member;
   }

@@ -5,16 +5,16 @@ import type {
   WallClockOnInput,
   WallDevice,
   WallPairing,
+  WallPinCheck,
   WallTask,
   WallTechnician,
-  WallTechnicianTasks,
 } from '@keybed/shared';
 import type { AuthContext, WallContext } from '../../http/context';
-import { notFound } from '../../http/errors';
+import { AppError, notFound } from '../../http/errors';
 import type { Logger } from '../../lib/logger';
 import { hashLinkToken, newLinkToken } from '../../lib/tokens';
 import type { PinsService } from '../pins/pins.service';
-import type { ClockService } from '../time/clock.service';
+import type { ClockActor, ClockService } from '../time/clock.service';
 import type { WallRepo } from './wall.repo';
 
 interface Deps {
@@ -33,11 +33,27 @@ const pianoLabel = (p: { maker: string; model: string; type: string }) => [p.mak
 /**
  * The wall screen: a browser an owner or foreman paired, holding a long-lived device token (only
  * its SHA-256 is stored) that allows the wall actions and nothing else. Each clock action names
- * the technician and carries the PIN they just entered.
+ * the technician and carries the PIN they just entered, or, for an action the screen kept while
+ * the network was down, the clock grant their PIN check gave this screen.
  */
 export function createWallService({ repo, pins, clock, logger, now }: Deps) {
   async function runningOf(workshopId: string): Promise<Map<string, RunningEntry>> {
     return new Map((await clock.running(workshopId)).map((r) => [r.technician.id, r]));
+  }
+
+  /** Who is acting: the PIN is checked now; a grant is checked inside the action's transaction. */
+  async function actorFor(wall: WallContext, input: { technicianId: string; pin?: string | undefined; grant?: string | undefined; at?: string | undefined }): Promise<ClockActor> {
+    const { technicianId, pin, grant, at } = input;
+    const actor: ClockActor = { workshopId: wall.workshopId, technicianId, byUserId: technicianId, source: 'wall', deviceId: wall.deviceId };
+    if (pin !== undefined) {
+      await pins.verifyAtWall(wall, technicianId, pin);
+      return actor;
+    }
+    if (grant === undefined) {
+      const message = 'Enter the 6-digit PIN, or send the grant from the PIN check';
+      throw new AppError('validation_failed', 400, message, { pin: [message], grant: [message] });
+    }
+    return { ...actor, authorise: (tx) => pins.checkGrant(tx, wall, technicianId, grant, at) };
   }
 
   return {
@@ -102,9 +118,12 @@ export function createWallService({ repo, pins, clock, logger, now }: Deps) {
 
     running: (wall: WallContext) => clock.running(wall.workshopId),
 
-    /** Checks the PIN; answers what the technician is on and the open tasks, assigned ones first. */
-    async verifyPin(wall: WallContext, technicianId: string, pin: string): Promise<WallTechnicianTasks> {
-      const member = await pins.verifyAtWall(wall, technicianId, pin);
+    /**
+     * Checks the PIN; answers what the technician is on, the open tasks (assigned ones first) and
+     * a clock grant with which this screen can send, later, what they do in the next few minutes.
+     */
+    async verifyPin(wall: WallContext, technicianId: string, pin: string): Promise<WallPinCheck> {
+      const { member, grant } = await pins.grantAtWall(wall, technicianId, pin);
       const [rows, running] = await Promise.all([repo.openTasks(wall.workshopId, technicianId), runningOf(wall.workshopId)]);
       const tasks: WallTask[] = rows.map((t) => ({
         id: t.id,
@@ -114,19 +133,17 @@ export function createWallService({ repo, pins, clock, logger, now }: Deps) {
         job: { ...t.job, pianoLabel: pianoLabel(t.piano) },
         stage: t.stage,
       }));
-      return { technician: { id: member.userId, name: member.name }, running: running.get(member.userId) ?? null, tasks };
+      return { technician: { id: member.userId, name: member.name }, running: running.get(member.userId) ?? null, tasks, grant };
     },
 
     async clockOn(wall: WallContext, input: WallClockOnInput) {
-      const { technicianId, pin, ...action } = input;
-      await pins.verifyAtWall(wall, technicianId, pin);
-      return clock.clockOn({ workshopId: wall.workshopId, technicianId, byUserId: technicianId, source: 'wall', deviceId: wall.deviceId }, action);
+      const { technicianId: _technician, pin: _pin, grant: _grant, ...action } = input;
+      return clock.clockOn(await actorFor(wall, input), action);
     },
 
     async clockOff(wall: WallContext, input: WallClockOffInput) {
-      const { technicianId, pin, ...action } = input;
-      await pins.verifyAtWall(wall, technicianId, pin);
-      return clock.clockOff({ workshopId: wall.workshopId, technicianId, byUserId: technicianId, source: 'wall', deviceId: wall.deviceId }, action);
+      const { technicianId: _technician, pin: _pin, grant: _grant, ...action } = input;
+      return clock.clockOff(await actorFor(wall, input), action);
     },
   };
 }

@@ -1,14 +1,14 @@
-import { ClockResult, WallTechnicianTasks, type WallClockOffInput, type WallClockOnInput } from '@keybed/shared';
+import { ClockResult, WallPinCheck, type WallClockOffInput, type WallClockOnInput } from '@keybed/shared';
 import { api } from '@/lib/api-client';
 
 /*
- * Requests that carry a technician's PIN. They are plain calls, never query-client mutations, so
- * the PIN is not kept in any cache once the request has gone.
+ * Requests that carry a technician's PIN or clock grant. They are plain calls, never query-client
+ * mutations, so neither is kept in any cache once the request has gone.
  */
 
-/** Checks the PIN; answers what the technician is on and their open tasks (assigned first). */
+/** Checks the PIN; answers what the technician is on, their open tasks (assigned first) and a clock grant. */
 export const verifyPin = (technicianId: string, pin: string) =>
-  api.post(`/wall/technicians/${encodeURIComponent(technicianId)}/verify-pin`, { pin }, WallTechnicianTasks);
+  api.post(`/wall/technicians/${encodeURIComponent(technicianId)}/verify-pin`, { pin }, WallPinCheck);
 
 export const wallClockOn = (input: WallClockOnInput) => api.post('/wall/clock-on', input, ClockResult);
 

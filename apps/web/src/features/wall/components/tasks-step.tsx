@@ -24,7 +24,7 @@ export function TasksStep({ step, technician, waiting, now, isBusy, onClockOn, o
     <div className="mx-auto max-w-7xl space-y-6">
       {step.isOffline && (
         <p role="status" className="rounded-xl bg-graphite-700 p-5 text-xl font-semibold text-white">
-          No network. What you do now is kept on this screen and sent, with your PIN checked, once the network is back.
+          No network, so your PIN could not be checked. What you do now is kept on this screen and sent once the network is back and your PIN is checked here.
         </p>
       )}
       {step.note && (

@@ -12,6 +12,10 @@ interface WaitingActionsProps {
 }
 
 const describe = (a: QueuedClockAction) => (a.kind === 'clock-on' ? `Clock on to ${a.task?.title ?? 'a task'}` : 'Clock off');
+const firstName = (name: string) => name.split(/\s+/)[0] ?? name;
+
+/** Where a waiting action stands: it goes by itself with its grant, or it needs its technician's PIN. */
+const waitingState = (a: QueuedClockAction) => (a.grant ? 'Sends by itself when the network is back' : `Waits for ${firstName(a.technician.name)} to enter a PIN here`);
 
 /** "N actions waiting to send": opens the list of what this screen holds and why. */
 export function WaitingActions({ actions, timeZone, isDurable, onDismiss }: WaitingActionsProps) {
@@ -37,7 +41,8 @@ export function WaitingActions({ actions, timeZone, isDurable, onDismiss }: Wait
       {isOpen && (
         <div id={listId} className="absolute right-0 z-30 mt-2 w-[min(44rem,90vw)] space-y-3 rounded-xl border-2 border-graphite-400 bg-white p-5 text-ink shadow-xl">
           <p className="text-xl">
-            Each waits on this screen and is sent, in order, the next time its technician enters a PIN here with the network up.
+            Each waits on this screen and is sent in order, with the time it was made. Actions made after a PIN check here go by themselves when the network is back; the
+            others go when their technician next enters a PIN here.
             {!isDurable && ' This browser does not keep them if the page is closed: keep this page open.'}
           </p>
           <ul className="space-y-2">
@@ -46,6 +51,7 @@ export function WaitingActions({ actions, timeZone, isDurable, onDismiss }: Wait
                 <span className="font-semibold tabular-figures">{format.format(new Date(a.at))}</span>
                 <span className="font-semibold">{a.technician.name}</span>
                 <span>{describe(a)}</span>
+                {a.state === 'waiting' && <span className="basis-full text-graphite-700">{waitingState(a)}</span>}
                 {a.state === 'refused' && (
                   <>
                     <span className="basis-full text-damper">Not accepted: {a.refusal?.message}</span>

@@ -10,8 +10,8 @@ import { wallKeys } from '../api/keys';
 import { useClockQueue } from '../hooks/use-clock-queue';
 import { useOnline } from '../hooks/use-online';
 import { useWallLive } from '../hooks/use-wall-live';
-import { shownRunning, waitingFor } from '../lib/clock-queue';
-import type { WallNotice } from '../lib/wall-notice';
+import { shownRunning, waitingFor, type SendReport } from '../lib/clock-queue';
+import { sentByItselfText, type WallNotice } from '../lib/wall-notice';
 import { TechnicianPanel } from './technician-panel';
 import { TechnicianTile } from './technician-tile';
 import { WaitingActions } from './waiting-actions';
@@ -38,10 +38,14 @@ function PairedWall({ pairing }: { pairing: WallPairing }) {
   const isOnline = useOnline();
   const isLive = useWallLive(true);
   const technicians = useWallTechnicians(isLive ? 60_000 : 10_000);
-  const queue = useClockQueue();
   const now = useNow(1_000);
   const [openId, setOpenId] = useState<string | null>(null);
   const [notice, setNotice] = useState<WallNotice | null>(null);
+  const sentByItself = useCallback((report: SendReport) => {
+    const text = sentByItselfText(report);
+    if (text) setNotice({ tone: report.refused.length > 0 ? 'problem' : 'done', text });
+  }, []);
+  const queue = useClockQueue({ onSentByItself: sentByItself });
   const taskCache = useRef(new Map<string, WallTechnicianTasks>());
 
   // A PIN lock or unlock sends no live event: read everyone afresh whenever a turn ends.
@@ -68,7 +72,7 @@ function PairedWall({ pairing }: { pairing: WallPairing }) {
         </WallHeader>
         {!isOnline && (
           <p role="status" className="bg-graphite-700 px-10 py-3 text-xl font-semibold text-white">
-            No network. Clock actions are kept on this screen and sent later.
+            No network. Clock actions are kept on this screen and sent when the network is back.
           </p>
         )}
         <main className="flex-1 px-6 py-6 pb-32 lg:px-10">

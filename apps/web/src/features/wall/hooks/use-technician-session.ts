@@ -2,6 +2,7 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import type { WallTask, WallTechnician, WallTechnicianTasks } from '@keybed/shared';
 import { isApiError } from '@/lib/api-client';
 import { verifyPin } from '../api/wall-actions';
+import { holdGrant, stampAction, type HeldGrant } from '../lib/clock-grant';
 import { waitingFor } from '../lib/clock-queue';
 import { isNetworkFailure } from '../lib/send-outcome';
 import { lockedMinutes, lockedText, noPinText, wallErrorText } from '../lib/wall-messages';
@@ -39,23 +40,32 @@ function firstStep(technician: WallTechnician): SessionStep {
 
 /**
  * One technician's turn at the wall. The PIN they enter is held in memory only while their
- * context is open (each clock action must carry it) and dropped when it closes; the offline
- * queue never stores it.
+ * context is open and dropped when it closes; the offline queue never stores it. A right PIN
+ * also brings a clock grant: an action made in the next few minutes is kept with that grant
+ * (never the PIN), so the screen can send it by itself when the network returns.
  */
 export function useTechnicianSession({ technician, queue, cachedTasks, onTasksLoaded, onClose, onUnpaired }: Options) {
   const [step, setStep] = useState<SessionStep>(() => firstStep(technician));
   const [isBusy, setIsBusy] = useState(false);
   const pin = useRef<string | null>(null);
+  const grant = useRef<HeldGrant | null>(null);
   const latest = useRef({ queue, step, isBusy });
   latest.current = { queue, step, isBusy };
   const { name } = technician;
 
-  useEffect(() => () => void (pin.current = null), []);
+  useEffect(
+    () => () => {
+      pin.current = null;
+      grant.current = null;
+    },
+    [],
+  );
 
   const failed = useCallback(
     (error: unknown) => {
       if (isApiError(error) && error.code === 'wall_not_paired') return onUnpaired();
       pin.current = null;
+      grant.current = null;
       if (isApiError(error) && BLOCKING.has(error.code)) return setStep({ name: 'blocked', text: wallErrorText(error, name) });
       setStep({ name: 'pin', message: wallErrorText(error, name) });
     },
@@ -67,20 +77,23 @@ export function useTechnicianSession({ technician, queue, cachedTasks, onTasksLo
     async (entered: string) => {
       setIsBusy(true);
       try {
-        let data = await verifyPin(technician.id, entered);
+        const checked = await verifyPin(technician.id, entered);
+        let { grant: issued, ...data } = checked;
         pin.current = entered;
         let note: string | undefined;
         if (waitingFor(latest.current.queue.actions, technician.id).length > 0) {
           const report = await latest.current.queue.sendFor(technician.id, entered);
           note = waitingReportText(report);
-          if (report.sent.length > 0) data = await verifyPin(technician.id, entered).catch(() => data);
+          if (report.sent.length > 0) ({ grant: issued, ...data } = await verifyPin(technician.id, entered).catch(() => checked));
         }
+        grant.current = holdGrant(issued, Date.now());
         onTasksLoaded(data);
         setStep({ name: 'tasks', data, isOffline: false, note });
       } catch (error) {
         if (!isNetworkFailure(error)) return failed(error);
-        // The PIN cannot be checked now; it is checked when the actions are sent.
+        // The PIN cannot be checked now, so there is no grant: actions wait for the PIN to be checked.
         pin.current = entered;
+        grant.current = null;
         setStep({ name: 'tasks', data: cachedTasks ?? null, isOffline: true });
       } finally {
         setIsBusy(false);
@@ -96,8 +109,7 @@ export function useTechnicianSession({ technician, queue, cachedTasks, onTasksLo
       setIsBusy(true);
       let queued, report;
       try {
-        queued = await queue.record(action);
-        report = await queue.sendFor(technician.id, pin.current, queued.key);
+        ({ queued, report } = await queue.submit(action, stampAction(grant.current, Date.now()), pin.current));
       } catch {
         return onClose({ tone: 'problem', text: 'This screen could not keep that action. Try again.' });
       } finally {
@@ -111,7 +123,7 @@ export function useTechnicianSession({ technician, queue, cachedTasks, onTasksLo
         return setStep((s) => (s.name === 'tasks' ? { ...s, note: refused.refusal?.message } : s));
       }
       const error = report.stoppedBy;
-      if (isNetworkFailure(error) || !isApiError(error) || error.status >= 500) return onClose({ tone: 'saved', text: savedText(name, doneText) });
+      if (isNetworkFailure(error) || !isApiError(error) || error.status >= 500) return onClose({ tone: 'saved', text: savedText(name, doneText, queued.grant !== undefined) });
       failed(error);
     },
     [queue, technician.id, name, onClose, failed],

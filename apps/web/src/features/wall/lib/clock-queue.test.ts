@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { RunningEntry } from '@keybed/shared';
-import { sendInOrder, shownRunning, waitingFor, type QueuedClockAction, type SendOutcome } from './clock-queue';
+import { grantedRuns, mergeReports, sendInOrder, shownRunning, waitingFor, type QueuedClockAction, type SendOutcome } from './clock-queue';
 
 const priya = { id: 'priya', name: 'Priya Natarajan' };
 const declan = { id: 'declan', name: 'Declan Moss' };
@@ -28,6 +28,38 @@ describe('waitingFor', () => {
 
   it('when an action was refused, then it no longer waits', () => {
     expect(waitingFor([{ ...onRebush, state: 'refused' }, onHang], 'priya').map((a) => a.key)).toEqual([onHang.key]);
+  });
+});
+
+describe('grantedRuns', () => {
+  const grant = { token: 'grant-token-for-priya-at-the-bench-room-screen', expiresAt: '2026-03-03T08:00:00Z' };
+  const granted = (a: QueuedClockAction): QueuedClockAction => ({ ...a, grant });
+
+  it('when every waiting action carries a grant, then each technician’s go together, oldest first', () => {
+    const runs = grantedRuns([granted(offPriya), granted(onDeclan), granted(onRebush), granted(onHang)]);
+    expect(runs.map((run) => run.map((a) => a.key))).toEqual([[onRebush.key, onHang.key, offPriya.key], [onDeclan.key]]);
+  });
+
+  it('when a technician’s action has no grant, then it and every later one of theirs wait for the PIN; others still go', () => {
+    const runs = grantedRuns([granted(onRebush), onHang, granted(offPriya), granted(onDeclan)]);
+    expect(runs.map((run) => run.map((a) => a.key))).toEqual([[onRebush.key], [onDeclan.key]]);
+  });
+
+  it('when a technician’s oldest action has no grant, or an action was refused, then nothing of theirs goes by itself', () => {
+    expect(grantedRuns([onRebush, granted(onHang)])).toEqual([]);
+    expect(grantedRuns([{ ...granted(onRebush), state: 'refused' }])).toEqual([]);
+  });
+});
+
+describe('mergeReports', () => {
+  it('when several technicians’ runs were sent, then one report holds them all and the first reason a send stopped', () => {
+    const stop = new TypeError('Failed to fetch');
+    const merged = mergeReports([
+      { sent: [onRebush], refused: [], left: [] },
+      { sent: [], refused: [], left: [onDeclan], stoppedBy: stop },
+    ]);
+    expect(merged).toEqual({ sent: [onRebush], refused: [], left: [onDeclan], stoppedBy: stop });
+    expect(mergeReports([])).toEqual({ sent: [], refused: [], left: [] });
   });
 });
 

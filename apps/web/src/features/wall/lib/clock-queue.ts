@@ -1,8 +1,10 @@
 import type { RunningEntry } from '@keybed/shared';
+import type { StoredGrant } from './clock-grant';
 
 /**
- * A clock action made on this screen, kept on the device until the API has it. It holds no PIN:
- * each is sent, in order, with the PIN its technician enters at the screen.
+ * A clock action made on this screen, kept on the device until the API has it. It holds no PIN.
+ * One made after a PIN check here carries that check's clock grant and is sent, in order, as soon
+ * as the network allows; one without a grant waits for its technician to enter a PIN here.
  */
 export interface QueuedClockAction {
   /** The idempotency key: the API counts an action once however often it is sent. */
@@ -15,6 +17,8 @@ export interface QueuedClockAction {
   task?: { id: string; title: string; jobTitle: string } | undefined;
   /** When it really happened (ISO 8601); sent with every replay so the entry keeps its real time. */
   at: string;
+  /** The clock grant that lets the screen send it without the PIN; absent, it waits for the PIN. */
+  grant?: StoredGrant | undefined;
   state: 'waiting' | 'refused';
   /** Why the API refused it, in its words. */
   refusal?: { code: string; message: string } | undefined;
@@ -25,6 +29,27 @@ export const inQueueOrder = (actions: readonly QueuedClockAction[]) => [...actio
 /** The technician's actions still to send, oldest first. */
 export function waitingFor(actions: readonly QueuedClockAction[], technicianId: string): QueuedClockAction[] {
   return inQueueOrder(actions).filter((a) => a.state === 'waiting' && a.technician.id === technicianId);
+}
+
+/**
+ * What the screen can send now without anyone at it: for each technician, their waiting actions
+ * in order up to the first one without a grant (that one, and all after it, wait for the PIN, so
+ * nothing overtakes it). Technicians are independent of each other.
+ */
+export function grantedRuns(actions: readonly QueuedClockAction[]): QueuedClockAction[][] {
+  const byTechnician = new Map<string, QueuedClockAction[]>();
+  for (const action of inQueueOrder(actions)) {
+    if (action.state !== 'waiting') continue;
+    const run = byTechnician.get(action.technician.id) ?? [];
+    byTechnician.set(action.technician.id, run);
+    run.push(action);
+  }
+  return [...byTechnician.values()].map((run) => run.slice(0, firstIndex(run, (a) => !a.grant))).filter((run) => run.length > 0);
+}
+
+function firstIndex<T>(items: readonly T[], test: (item: T) => boolean): number {
+  const i = items.findIndex(test);
+  return i === -1 ? items.length : i;
 }
 
 /** What sending one action came to. */
@@ -64,6 +89,13 @@ export async function sendInOrder(
     else return { ...report, left: queue.slice(i), stoppedBy: outcome.error };
   }
   return report;
+}
+
+/** Several reports (one per technician's run) as one. */
+export function mergeReports(reports: readonly SendReport[]): SendReport {
+  const merged: SendReport = { sent: reports.flatMap((r) => r.sent), refused: reports.flatMap((r) => r.refused), left: reports.flatMap((r) => r.left) };
+  const stopped = reports.find((r) => r.stoppedBy !== undefined);
+  return stopped ? { ...merged, stoppedBy: stopped.stoppedBy } : merged;
 }
 
 /** What the wall shows a technician as on: the API's running entry, unless actions wait on this screen. */

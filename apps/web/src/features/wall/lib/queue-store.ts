@@ -13,6 +13,7 @@ const StoredAction = z.object({
   technician: z.object({ id: z.string(), name: z.string() }),
   task: z.object({ id: z.string(), title: z.string(), jobTitle: z.string() }).optional(),
   at: z.string(),
+  grant: z.object({ token: z.string(), expiresAt: z.string() }).optional(),
   state: z.enum(['waiting', 'refused']),
   refusal: z.object({ code: z.string(), message: z.string() }).optional(),
 });

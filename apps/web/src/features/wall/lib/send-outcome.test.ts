@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ApiError } from '@/lib/api-client';
-import { isNetworkFailure, outcomeOfError } from './send-outcome';
+import { isGrantRefusal, isNetworkFailure, outcomeOfError } from './send-outcome';
 
 const apiError = (status: number, code: ConstructorParameters<typeof ApiError>[0]['code'], message = 'Refused') => new ApiError({ status, code, message });
 
@@ -11,8 +11,8 @@ describe('outcomeOfError', () => {
     expect(outcomeOfError(apiError(409, 'task_not_open'), false)).toMatchObject({ kind: 'stopped' });
   });
 
-  it('when the PIN is wrong or locked, or the server is in trouble, then the action waits for another try', () => {
-    for (const error of [apiError(403, 'pin_incorrect'), apiError(429, 'pin_locked'), apiError(429, 'wall_pin_limit'), apiError(503, 'service_unavailable'), apiError(500, 'internal')]) {
+  it('when the PIN is wrong or locked, the grant is refused, or the server is in trouble, then the action waits for another try', () => {
+    for (const error of [apiError(403, 'pin_incorrect'), apiError(403, 'grant_refused'), apiError(429, 'pin_locked'), apiError(429, 'wall_pin_limit'), apiError(503, 'service_unavailable'), apiError(500, 'internal')]) {
       expect(outcomeOfError(error, true)).toMatchObject({ kind: 'stopped' });
     }
   });
@@ -25,6 +25,14 @@ describe('outcomeOfError', () => {
     });
     expect(outcomeOfError(apiError(409, 'not_running'), true)).toMatchObject({ kind: 'refused' });
     expect(outcomeOfError(apiError(400, 'validation_failed'), true)).toMatchObject({ kind: 'refused' });
+  });
+});
+
+describe('isGrantRefusal', () => {
+  it('when the API refuses the grant, then only the PIN can send the action; other refusals are not about the grant', () => {
+    expect(isGrantRefusal(apiError(403, 'grant_refused'))).toBe(true);
+    expect(isGrantRefusal(apiError(403, 'pin_incorrect'))).toBe(false);
+    expect(isGrantRefusal(new TypeError('Failed to fetch'))).toBe(false);
   });
 });
 

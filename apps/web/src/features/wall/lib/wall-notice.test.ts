@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { QueuedClockAction } from './clock-queue';
-import { savedText, waitingReportText } from './wall-notice';
+import { savedText, sentByItselfText, waitingReportText } from './wall-notice';
 
 const action = (key: string): QueuedClockAction => ({
   key,
@@ -29,9 +29,33 @@ describe('waitingReportText', () => {
 });
 
 describe('savedText', () => {
-  it('when an action is kept on the screen, then it names the technician by first name', () => {
-    expect(savedText('Priya Natarajan', 'Priya Natarajan clocked off.')).toBe(
+  it('when an action is kept with a grant, then it says it goes by itself when the network is back', () => {
+    expect(savedText('Priya Natarajan', 'Priya Natarajan is on Hang new hammers.', true)).toBe(
+      'Saved on this screen: Priya Natarajan is on Hang new hammers. It will be sent by itself when the network is back.',
+    );
+  });
+
+  it('when an action is kept without a grant, then it waits for the technician’s PIN, named by first name', () => {
+    expect(savedText('Priya Natarajan', 'Priya Natarajan clocked off.', false)).toBe(
       'Saved on this screen: Priya Natarajan clocked off. It will be sent the next time Priya enters a PIN here with the network back.',
     );
+  });
+});
+
+describe('sentByItselfText', () => {
+  const onHang: QueuedClockAction = { ...action('a'), kind: 'clock-on', task: { id: 't1', title: 'Hang new hammers', jobTitle: 'Salon grand: new hammers' } };
+  const declanOff: QueuedClockAction = { ...action('b'), technician: { id: 'declan', name: 'Declan Moss' } };
+
+  it('when nothing was sent or refused, then there is nothing to say', () => {
+    expect(sentByItselfText({ sent: [], refused: [], left: [onHang] })).toBeUndefined();
+  });
+
+  it('when actions went by themselves, then each is named with its technician', () => {
+    expect(sentByItselfText({ sent: [onHang, declanOff], refused: [], left: [] })).toBe('Sent now the network is back: Priya on Hang new hammers, Declan clocked off.');
+  });
+
+  it('when one was refused, then the API’s reason is said for that technician', () => {
+    const refused = { ...declanOff, state: 'refused' as const, refusal: { code: 'not_running', message: 'Declan Moss is not clocked on to anything.' } };
+    expect(sentByItselfText({ sent: [], refused: [refused], left: [] })).toBe('Not accepted for Declan: Declan Moss is not clocked on to anything.');
   });
 });
