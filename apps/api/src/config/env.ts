@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { z } from 'zod';
 
 const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
@@ -93,7 +94,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     databaseUrl: e.DATABASE_URL,
     databasePoolMax: e.DATABASE_POOL_MAX,
     appOrigin: (e.APP_ORIGIN ?? `http://localhost:${e.PORT}`).replace(/\/$/, ''),
-    webDist: e.WEB_DIST,
+    webDist: e.WEB_DIST ? path.resolve(e.WEB_DIST) : undefined,
     trustProxy: e.TRUST_PROXY,
     logLevel: e.LOG_LEVEL,
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, secure: e.SMTP_SECURE, user: e.SMTP_USER, pass: e.SMTP_PASS, from: e.MAIL_FROM },
