@@ -11,8 +11,8 @@ import { SignOutButton } from './sign-out-button';
 export function AppHeader({ me, isWide = false }: { me: Me; isWide?: boolean }) {
   return (
     <header className="bg-ink text-paper">
-      <div className={cx('mx-auto flex flex-wrap items-center', !isWide && 'max-w-7xl', 'gap-x-6 gap-y-1 px-4 pt-2 sm:px-6 lg:px-8 lg:py-1')}>
-        <div className="order-1 flex min-w-0 flex-1 items-center gap-3 py-1 lg:flex-none">
+      <div className={cx('mx-auto flex flex-wrap items-center', !isWide && 'max-w-7xl', 'gap-x-6 gap-y-1 px-4 pt-2 sm:px-6 lg:px-8')}>
+        <div className="order-1 flex min-w-0 flex-1 items-center gap-3 py-1">
           <LogoMark className="text-graphite-700" />
           <div className="min-w-0">
             <Link to={paths.home.build()} className="block text-lg leading-tight font-bold hover:underline">
@@ -26,8 +26,9 @@ export function AppHeader({ me, isWide = false }: { me: Me; isWide?: boolean }) 
             </p>
           </div>
         </div>
-        <MainNav role={me.role} className="order-3 w-full lg:order-2 lg:w-auto lg:flex-1" />
-        <div className="order-2 flex items-center gap-3 lg:order-3">
+        {/* Its own row: with every page an owner uses, the items no longer fit beside the name. */}
+        <MainNav role={me.role} className="order-3 w-full" />
+        <div className="order-2 flex items-center gap-3">
           <Link to={paths.profile.build()} className="hidden text-right text-sm leading-tight hover:underline sm:block">
             <span className="sr-only">Your profile: </span>
             <span className="block font-semibold">{me.user.name}</span>

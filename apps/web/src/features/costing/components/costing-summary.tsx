@@ -21,9 +21,9 @@ export function CostingSummary({ costing }: { costing: JobCosting }) {
   const { hours, money, currency } = costing;
   const m = (minor: number) => formatMinor(minor, currency);
   return (
-    <div className="grid gap-4 lg:grid-cols-3">
+    <div className="grid gap-4 md:grid-cols-2">
       <section aria-label="Hours" className={panel}>
-        <h4 className="font-semibold">Hours</h4>
+        <h3 className="font-semibold">Hours</h3>
         <HoursMeter estimatedMinutes={hours.estimatedMinutes} actualMinutes={hours.actualMinutes} />
         <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm">
           <Row label="Estimated">{formatHoursMinutes(hours.estimatedMinutes)}</Row>
@@ -35,7 +35,7 @@ export function CostingSummary({ costing }: { costing: JobCosting }) {
       {money && (
         <>
           <section aria-label="Cost to date" className={panel}>
-            <h4 className="font-semibold">Cost to date</h4>
+            <h3 className="font-semibold">Cost to date</h3>
             <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm">
               <Row label="Labour">{m(money.labourCostMinor)}</Row>
               <Row label="Parts">{m(money.partsCostMinor)}</Row>
@@ -43,9 +43,9 @@ export function CostingSummary({ costing }: { costing: JobCosting }) {
               <Row label="Cost to date" isStrong>{m(money.costToDateMinor)}</Row>
             </dl>
           </section>
-          <section aria-label="Forecast at completion" className={panel}>
-            <h4 className="font-semibold">Forecast at completion</h4>
-            <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm">
+          <section aria-label="Forecast at completion" className={cx(panel, 'md:col-span-2')}>
+            <h3 className="font-semibold">Forecast at completion</h3>
+            <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm md:max-w-md">
               <Row label="Agreed price ex VAT">{m(money.priceMinor)}</Row>
               <Row label={`Hours left at ${m(money.averageCostRateMinorPerHour)} an hour`}>{m(money.remainingLabourMinor)}</Row>
               <Row label="Budgeted parts not yet used">{m(money.unusedBudgetedPartsMinor)}</Row>
@@ -55,14 +55,18 @@ export function CostingSummary({ costing }: { costing: JobCosting }) {
                 {m(money.forecastMarginMinor)} · {formatPercent(money.forecastMarginPercent)}
               </Row>
             </dl>
-            <p className={cx('text-sm', money.isBelowTargetMargin ? 'font-semibold text-damper' : 'text-graphite-600')}>
-              {money.isBelowTargetMargin ? 'Below' : 'At or above'} the target margin of {formatBasisPoints(money.targetMarginBasisPoints)}.
-            </p>
+            {money.priceMinor === 0 ? (
+              <p className="text-sm font-semibold text-damper">No agreed price yet: every cost here is unpaid until the client accepts an estimate.</p>
+            ) : (
+              <p className={cx('text-sm', money.isBelowTargetMargin ? 'font-semibold text-damper' : 'text-graphite-600')}>
+                {money.isBelowTargetMargin ? 'Below' : 'At or above'} the target margin of {formatBasisPoints(money.targetMarginBasisPoints)}.
+              </p>
+            )}
           </section>
         </>
       )}
       {money && money.unratedMinutes > 0 && (
-        <Alert className="lg:col-span-3" title="Some hours have no cost rate.">
+        <Alert className="md:col-span-2" title="Some hours have no cost rate.">
           <p>{formatHoursMinutes(money.unratedMinutes)} were logged by someone with no cost rate on that day, so they cost nothing here. Add the rate in Settings.</p>
         </Alert>
       )}

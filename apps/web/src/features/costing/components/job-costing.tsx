@@ -23,12 +23,12 @@ export function JobCosting({ jobId }: { jobId: string }) {
       <CostingSummary costing={data} />
       {data.tasks.length === 0 ? <p className="text-graphite-600">No tasks yet: hours are budgeted and logged per task.</p> : <TaskCostsTable costing={data} />}
       <div className="space-y-2">
-        <h4 className="font-semibold">Parts against the budget</h4>
+        <h3 className="font-semibold">Parts against the budget</h3>
         <JobPartsTable costing={data} />
       </div>
       {data.subletBills && (
         <div className="space-y-2">
-          <h4 className="font-semibold">Sublet bills</h4>
+          <h3 className="font-semibold">Sublet bills</h3>
           <SubletBills jobId={jobId} bills={data.subletBills} currency={data.currency} />
         </div>
       )}

@@ -31,7 +31,7 @@ function ChartFrame({ title, summary, children }: ChartFrameProps) {
 /** Forecast margin % per job against the target margin line; jobs below it in damper. */
 export function MarginChart({ report }: { report: MarginsReport }) {
   const isReduced = usePrefersReducedMotion();
-  const rows = report.rows.filter((r) => r.forecastMarginPercent !== null).map((r) => ({ name: shorten(r.title), percent: Math.round(r.forecastMarginPercent! * 10) / 10, isBelow: r.isBelowTargetMargin }));
+  const rows = report.rows.filter((r) => r.forecastMarginPercent !== null).map((r) => ({ id: r.jobId, name: shorten(r.title), percent: Math.round(r.forecastMarginPercent! * 10) / 10, isBelow: r.isBelowTargetMargin }));
   const target = report.targetMarginBasisPoints / 100;
   const below = rows.filter((r) => r.isBelow).length;
   const summary =
@@ -42,16 +42,16 @@ export function MarginChart({ report }: { report: MarginsReport }) {
     <ChartFrame title="Forecast margin by job" summary={summary}>
       {rows.length > 0 && (
         <ResponsiveContainer width="100%" height={heightFor(rows.length)}>
-          <BarChart data={rows} layout="vertical" margin={{ left: 8, right: 24 }} accessibilityLayer={false}>
+          <BarChart data={rows} layout="vertical" margin={{ top: 24, left: 8, right: 40 }} accessibilityLayer={false}>
             <CartesianGrid horizontal={false} stroke={COLOURS.grid} />
             <XAxis type="number" unit=" %" tick={tick} domain={[(min: number) => Math.min(0, Math.floor(min / 10) * 10), (max: number) => Math.max(target + 10, Math.ceil(max / 10) * 10)]} />
             <YAxis type="category" dataKey="name" width={190} tick={tick} />
-            <ReferenceLine x={target} stroke={COLOURS.walnut} strokeDasharray="4 3" label={{ value: `Target ${formatPercent(target)}`, position: 'top', fill: COLOURS.walnut, fontSize: 12 }} />
             <Bar dataKey="percent" name="Forecast margin %" isAnimationActive={!isReduced} label={{ position: 'right', fill: COLOURS.graphite, fontSize: 12, formatter: (v: unknown) => `${v} %` }}>
               {rows.map((r) => (
-                <Cell key={r.name} fill={r.isBelow ? COLOURS.damper : COLOURS.felt} />
+                <Cell key={r.id} fill={r.isBelow ? COLOURS.damper : COLOURS.felt} />
               ))}
             </Bar>
+            <ReferenceLine x={target} stroke={COLOURS.walnut} strokeDasharray="4 3" label={{ value: `Target ${formatPercent(target)}`, position: 'top', fill: COLOURS.walnut, fontSize: 12 }} />
           </BarChart>
         </ResponsiveContainer>
       )}

@@ -71,7 +71,7 @@ export function MarginsTable({ report }: { report: MarginsReport }) {
 
   return (
     <div className="overflow-x-auto rounded-lg border border-graphite-300 bg-white">
-      <table className="w-full min-w-[60rem] text-sm">
+      <table className="w-full min-w-[72rem] text-sm">
         <caption className="px-3 pt-3 text-left text-sm text-graphite-600">
           {totals.jobCount} {totals.jobCount === 1 ? 'job' : 'jobs'}, {totals.atRiskCount} at risk. Choose a column heading to sort by it.
         </caption>
@@ -100,7 +100,7 @@ export function MarginsTable({ report }: { report: MarginsReport }) {
                 const isNumeric = (cell.column.columnDef.meta as { isNumeric?: boolean } | undefined)?.isNumeric;
                 const Cell = cell.column.id === 'title' ? 'th' : 'td';
                 return (
-                  <Cell key={cell.id} scope={Cell === 'th' ? 'row' : undefined} className={cx(td, Cell === 'th' && 'text-left font-normal', isNumeric && 'text-right tabular-figures')}>
+                  <Cell key={cell.id} scope={Cell === 'th' ? 'row' : undefined} className={cx(td, Cell === 'th' && 'min-w-64 text-left font-normal', cell.column.id === 'isAtRisk' && 'min-w-32', isNumeric && 'text-right whitespace-nowrap tabular-figures')}>
                     <table.FlexRender cell={cell} />
                   </Cell>
                 );

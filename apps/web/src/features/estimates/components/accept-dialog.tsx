@@ -54,9 +54,11 @@ export function AcceptDialog({ estimate, isOpen, isPending, onAccept, onCancel }
         </fieldset>
       ))}
       {problems.length > 0 && (
-        <ul role="alert" className="mt-2 list-disc pl-5 text-sm font-semibold text-damper">
-          {problems.map((p) => <li key={p}>{p}</li>)}
-        </ul>
+        <div role="alert">
+          <ul className="mt-2 list-disc pl-5 text-sm font-semibold text-damper">
+            {problems.map((p) => <li key={p}>{p}</li>)}
+          </ul>
+        </div>
       )}
     </ConfirmDialog>
   );

@@ -39,7 +39,7 @@ export function ChoiceEditor(props: ChoiceEditorProps) {
         return (
           <div key={option.key} role="group" aria-label={`Option: ${label}`} className="space-y-3 rounded-md border border-graphite-300 bg-paper p-3">
             <div className="flex flex-wrap items-end gap-3">
-              <Field label={`Option ${i + 1}`} error={ctx.errorFor(`options.${index(option.key)}.name`)} className="min-w-56 flex-1">
+              <Field label="Option name" error={ctx.errorFor(`options.${index(option.key)}.name`)} className="min-w-56 flex-1">
                 {(c) => <TextInput {...c} className="min-h-9 text-sm" placeholder="e.g. New hammers" value={option.name} onChange={(e) => onRenameOption(option.key, e.target.value)} />}
               </Field>
               <p className="pb-2 text-sm tabular-figures">

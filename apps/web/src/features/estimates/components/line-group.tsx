@@ -1,6 +1,6 @@
 import { ESTIMATE_LINE_KINDS, type EstimateLineKind } from '@keybed/shared';
 import { Button } from '@/components/button';
-import { LINE_KIND_LABELS, type LineDraft } from '../lib/estimate-draft';
+import type { LineDraft } from '../lib/estimate-draft';
 import { LineEditor, type LineEditorContext } from './line-editor';
 
 interface LineGroupProps extends LineEditorContext {
@@ -14,6 +14,9 @@ interface LineGroupProps extends LineEditorContext {
   onRemove: (uid: string) => void;
   onAdd: (kind: EstimateLineKind, optionKey: string | null) => void;
 }
+
+/** Each group's add buttons share these names; the group (a named region or option) tells them apart. */
+const ADD_LABELS: Record<EstimateLineKind, string> = { labour: 'Add labour', part: 'Add a part', sublet: 'Add sublet work', other: 'Add another cost' };
 
 /** The lines of one group (always included, or one option) and buttons to add more. */
 export function LineGroup({ allLines, optionKey, groupName, amounts, onChange, onRemove, onAdd, ...ctx }: LineGroupProps) {
@@ -33,12 +36,9 @@ export function LineGroup({ allLines, optionKey, groupName, amounts, onChange, o
         />
       ))}
       <div className="flex flex-wrap items-center gap-2">
-        <span className="text-sm font-semibold text-graphite-700" aria-hidden="true">
-          Add:
-        </span>
         {ESTIMATE_LINE_KINDS.map((kind) => (
-          <Button key={kind} size="sm" variant="secondary" aria-label={`Add a ${LINE_KIND_LABELS[kind].toLowerCase()} line to ${groupName}`} onClick={() => onAdd(kind, optionKey)}>
-            + {LINE_KIND_LABELS[kind]}
+          <Button key={kind} size="sm" variant="secondary" title={`Add a line to ${groupName}`} onClick={() => onAdd(kind, optionKey)}>
+            {ADD_LABELS[kind]}
           </Button>
         ))}
       </div>
