@@ -56,8 +56,8 @@ export function StockLedger({ movements, unit, currency }: { movements: StockMov
                 {!m.job && !m.reason && <span className="text-graphite-600">—</span>}
               </td>
               <td className="px-3 py-2">{m.by?.name ?? '—'}</td>
-              {hasCosts && <td className="px-3 py-2 text-right tabular-figures">{m.unitCostMinor !== undefined ? formatMinor(m.unitCostMinor, currency) : '—'}</td>}
-              {hasCosts && <td className="px-3 py-2 text-right tabular-figures">{m.valueMinor !== undefined ? formatMinor(m.valueMinor, currency) : '—'}</td>}
+              {hasCosts && <td className="px-3 py-2 text-right whitespace-nowrap tabular-figures">{m.unitCostMinor !== undefined ? formatMinor(m.unitCostMinor, currency) : '—'}</td>}
+              {hasCosts && <td className="px-3 py-2 text-right whitespace-nowrap tabular-figures">{m.valueMinor !== undefined ? formatMinor(m.valueMinor, currency) : '—'}</td>}
             </tr>
           ))}
         </tbody>
