@@ -21,6 +21,17 @@ export class WallPage {
     for (const digit of pin) await pad.getByRole('button', { name: digit, exact: true }).click();
   }
 
+  /** Logs a part against the task the technician is on, from their panel. */
+  async logPart(name: string, pin: string, part: string, quantity: string) {
+    await this.openWithPin(name, pin);
+    const panel = this.panel(name);
+    await panel.getByRole('button', { name: 'Log a part' }).click();
+    await panel.getByRole('button', { name: new RegExp(`^${part.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) }).click();
+    await panel.getByLabel('Quantity').fill(quantity);
+    await panel.getByRole('button', { name: /^Log / }).click();
+    await expect(panel.getByRole('status').or(this.page.getByRole('status')).filter({ hasText: /Logged/ }).first()).toBeVisible();
+  }
+
   async openWithPin(name: string, pin: string) {
     await this.tile(name).click();
     await this.enterPin(name, pin);
