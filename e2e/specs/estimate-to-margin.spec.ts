@@ -8,6 +8,7 @@ const PRIYA = { name: 'Priya Natarajan', pin: '246810' };
 const HAMMER_SET = 'Hammer set, grand, 88';
 
 test.use({ viewport: { width: 1920, height: 1080 } });
+test.setTimeout(90_000);
 
 test('the owner prices a job with two options, the wall logs time and a part, and the margins page shows the cost', async ({ page, browser }) => {
   const t = Math.random().toString(36).slice(2, 7);
