@@ -1,4 +1,3 @@
-import type { FormEvent } from 'react';
 import { AcceptInvitationInput, type InvitationPreview } from '@keybed/shared';
 import { Button } from '@/components/button';
 import { Field } from '@/components/field';
@@ -7,8 +6,7 @@ import { TextInput } from '@/components/text-input';
 import { TextLink } from '@/components/text-link';
 import { paths } from '@/config/paths';
 import { isApiError } from '@/lib/api-client';
-import { readForm, validateForm } from '@/lib/form';
-import { useFormErrors } from '@/lib/use-form-errors';
+import { useSchemaForm } from '@/lib/use-schema-form';
 import { useAcceptInvitation } from '../api/accept-invitation';
 
 interface AcceptInvitationFormProps {
@@ -19,26 +17,13 @@ interface AcceptInvitationFormProps {
 
 export function AcceptInvitationForm({ token, preview, onJoined }: AcceptInvitationFormProps) {
   const accept = useAcceptInvitation();
-  const form = useFormErrors();
+  const form = useSchemaForm(AcceptInvitationInput, accept, { extra: () => ({ token }), onSuccess: onJoined });
   const code = isApiError(accept.error) ? accept.error.code : undefined;
 
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const result = validateForm(AcceptInvitationInput, { ...readForm(event.currentTarget), token });
-    if (result.fields) {
-      accept.reset();
-      return form.showFields(result.fields);
-    }
-    form.reset();
-    accept.mutate(result.data, { onSuccess: onJoined, onError: form.showApiFields });
-  }
 
   return (
     <form
-      ref={form.formRef}
-      noValidate
-      onSubmit={handleSubmit}
-      onInput={(event) => form.clearField((event.target as HTMLInputElement).name)}
+      {...form.formProps}
       className="space-y-4"
     >
       <FormError error={accept.error}>

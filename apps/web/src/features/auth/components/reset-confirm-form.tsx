@@ -1,4 +1,3 @@
-import type { FormEvent } from 'react';
 import { PasswordResetConfirmInput } from '@keybed/shared';
 import { Alert } from '@/components/alert';
 import { Button } from '@/components/button';
@@ -8,8 +7,7 @@ import { TextInput } from '@/components/text-input';
 import { TextLink } from '@/components/text-link';
 import { paths } from '@/config/paths';
 import { isApiError } from '@/lib/api-client';
-import { readForm, validateForm } from '@/lib/form';
-import { useFormErrors } from '@/lib/use-form-errors';
+import { useSchemaForm } from '@/lib/use-schema-form';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 
 interface ResetConfirmFormProps {
@@ -19,27 +17,14 @@ interface ResetConfirmFormProps {
 
 export function ResetConfirmForm({ token, onPasswordSet }: ResetConfirmFormProps) {
   const confirm = useConfirmPasswordReset();
-  const form = useFormErrors();
+  const form = useSchemaForm(PasswordResetConfirmInput, confirm, { extra: () => ({ token }), onSuccess: onPasswordSet });
   const isLinkBad =
     (isApiError(confirm.error) && confirm.error.code === 'token_invalid') || form.fields.token !== undefined;
 
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const result = validateForm(PasswordResetConfirmInput, { ...readForm(event.currentTarget), token });
-    if (result.fields) {
-      confirm.reset();
-      return form.showFields(result.fields);
-    }
-    form.reset();
-    confirm.mutate(result.data, { onSuccess: onPasswordSet, onError: form.showApiFields });
-  }
 
   return (
     <form
-      ref={form.formRef}
-      noValidate
-      onSubmit={handleSubmit}
-      onInput={(event) => form.clearField((event.target as HTMLInputElement).name)}
+      {...form.formProps}
       className="space-y-4"
     >
       {isLinkBad ? (

@@ -1,29 +1,17 @@
-import type { FormEvent } from 'react';
 import { PasswordResetRequestInput } from '@keybed/shared';
 import { Alert } from '@/components/alert';
 import { Button } from '@/components/button';
 import { Field } from '@/components/field';
 import { FormError } from '@/components/form-error';
 import { TextInput } from '@/components/text-input';
-import { readForm, validateForm } from '@/lib/form';
-import { useFormErrors } from '@/lib/use-form-errors';
+import { useSchemaForm } from '@/lib/use-schema-form';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 
 /** Asks for a reset link. The answer never says whether the account exists. */
 export function ResetRequestForm() {
   const request = useRequestPasswordReset();
-  const form = useFormErrors();
+  const form = useSchemaForm(PasswordResetRequestInput, request, {});
 
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const result = validateForm(PasswordResetRequestInput, readForm(event.currentTarget));
-    if (result.fields) {
-      request.reset();
-      return form.showFields(result.fields);
-    }
-    form.reset();
-    request.mutate(result.data, { onError: form.showApiFields });
-  }
 
   if (request.isSuccess) {
     return (
@@ -44,10 +32,7 @@ export function ResetRequestForm() {
 
   return (
     <form
-      ref={form.formRef}
-      noValidate
-      onSubmit={handleSubmit}
-      onInput={(event) => form.clearField((event.target as HTMLInputElement).name)}
+      {...form.formProps}
       className="space-y-4"
     >
       <FormError error={request.error} />

@@ -1,34 +1,18 @@
-import type { FormEvent } from 'react';
 import { SignInInput } from '@keybed/shared';
 import { Button } from '@/components/button';
 import { Field } from '@/components/field';
 import { FormError } from '@/components/form-error';
 import { TextInput } from '@/components/text-input';
-import { readForm, validateForm } from '@/lib/form';
-import { useFormErrors } from '@/lib/use-form-errors';
+import { useSchemaForm } from '@/lib/use-schema-form';
 import { useSignIn } from '../api/sign-in';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const signIn = useSignIn();
-  const form = useFormErrors();
-
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const result = validateForm(SignInInput, readForm(event.currentTarget));
-    if (result.fields) {
-      signIn.reset();
-      return form.showFields(result.fields);
-    }
-    form.reset();
-    signIn.mutate(result.data, { onSuccess: onSignedIn, onError: form.showApiFields });
-  }
+  const form = useSchemaForm(SignInInput, signIn, { onSuccess: onSignedIn });
 
   return (
     <form
-      ref={form.formRef}
-      noValidate
-      onSubmit={handleSubmit}
-      onInput={(event) => form.clearField((event.target as HTMLInputElement).name)}
+      {...form.formProps}
       className="space-y-4"
     >
       <FormError error={signIn.error} />

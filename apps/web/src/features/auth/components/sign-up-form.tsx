@@ -1,42 +1,27 @@
-import type { FormEvent } from 'react';
 import { SignUpInput } from '@keybed/shared';
 import { Button } from '@/components/button';
 import { Field } from '@/components/field';
 import { FormError } from '@/components/form-error';
 import { TextInput } from '@/components/text-input';
 import { isApiError } from '@/lib/api-client';
-import { readForm, validateForm } from '@/lib/form';
-import { useFormErrors } from '@/lib/use-form-errors';
+import { useSchemaForm } from '@/lib/use-schema-form';
 import { useSignUp } from '../api/sign-up';
 
 export function SignUpForm({ onCreated }: { onCreated: () => void }) {
   const signUp = useSignUp();
-  const form = useFormErrors();
-
-  function handleError(error: Error) {
-    if (isApiError(error) && error.code === 'email_taken') {
-      return form.showFields({ email: ['An account already uses this e-mail. Sign in instead, or use another e-mail.'] });
-    }
-    form.showApiFields(error);
-  }
-
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const result = validateForm(SignUpInput, readForm(event.currentTarget));
-    if (result.fields) {
-      signUp.reset();
-      return form.showFields(result.fields);
-    }
-    form.reset();
-    signUp.mutate(result.data, { onSuccess: onCreated, onError: handleError });
-  }
+  const form = useSchemaForm(SignUpInput, signUp, {
+    onSuccess: onCreated,
+    onError: (error, fields) => {
+      if (isApiError(error) && error.code === 'email_taken') {
+        return fields.showFields({ email: ['An account already uses this e-mail. Sign in instead, or use another e-mail.'] });
+      }
+      fields.showApiFields(error);
+    },
+  });
 
   return (
     <form
-      ref={form.formRef}
-      noValidate
-      onSubmit={handleSubmit}
-      onInput={(event) => form.clearField((event.target as HTMLInputElement).name)}
+      {...form.formProps}
       className="space-y-4"
     >
       <FormError error={signUp.error} except={['email_taken']} />
