@@ -27,6 +27,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Parts', to: paths.parts.build(), isAllowed: everyone, Badge: LowStockNavCount },
   { label: 'Timesheets', to: paths.timesheets.build(), isAllowed: everyone },
   { label: 'Margins', to: paths.margins.build(), isAllowed: canSeeCosts },
+  { label: 'Catalogue', to: paths.catalogue.build(), isAllowed: canRunBoard },
   { label: 'Stages', to: paths.stagesSettings.build(), isAllowed: canRunBoard },
   { label: 'Wall screen', to: paths.wallScreensSettings.build(), isAllowed: canSuperviseBench },
   { label: 'Team', to: paths.team.build(), isAllowed: canManageTeam },

@@ -53,6 +53,12 @@ export function createRouter(queryClient: QueryClient) {
                 { path: paths.client.path, lazy: lazy(() => import('./routes/client')) },
                 { path: paths.newPiano.path, lazy: lazy(() => import('./routes/new-piano')) },
                 { path: paths.piano.path, lazy: lazy(() => import('./routes/piano')) },
+                { path: paths.newSurvey.path, lazy: lazy(() => import('./routes/new-survey')) },
+                { path: paths.survey.path, lazy: lazy(() => import('./routes/survey')) },
+                { path: paths.surveyEstimate.path, lazy: lazy(() => import('./routes/survey-estimate')) },
+                { path: paths.catalogue.path, lazy: lazy(() => import('./routes/catalogue')) },
+                { path: paths.newCatalogueOperation.path, lazy: lazy(() => import('./routes/catalogue-operation')) },
+                { path: paths.catalogueOperation.path, lazy: lazy(() => import('./routes/catalogue-operation')) },
                 { path: paths.stagesSettings.path, lazy: lazy(() => import('./routes/stages-settings')) },
                 { path: paths.wallScreensSettings.path, lazy: lazy(() => import('./routes/wall-screens-settings')) },
                 { path: paths.wallPair.path, lazy: lazy(() => import('./routes/wall-pair')) },
@@ -70,6 +76,8 @@ export function createRouter(queryClient: QueryClient) {
         },
         // The wall screen has its own full-screen layout and its own device session, not a member's.
         { path: paths.wall.path, lazy: lazy(() => import('./routes/wall')) },
+        // The client's page answers to its link token alone: no session, no app navigation.
+        { path: paths.clientPage.path, lazy: lazy(() => import('./routes/client-page')) },
         { path: '*', lazy: lazy(() => import('./routes/not-found')) },
       ],
     },

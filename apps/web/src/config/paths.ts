@@ -39,6 +39,14 @@ export const paths = {
     build: (options: { clientId?: string } = {}) => withQuery('/pianos/new', options),
   },
   piano: { path: '/pianos/:id', build: (id: string) => `/pianos/${encodeURIComponent(id)}` },
+  newSurvey: { path: '/pianos/:id/surveys/new', build: (pianoId: string) => `/pianos/${encodeURIComponent(pianoId)}/surveys/new` },
+  survey: { path: '/surveys/:id', build: (id: string) => `/surveys/${encodeURIComponent(id)}` },
+  surveyEstimate: { path: '/surveys/:id/estimate', build: (id: string) => `/surveys/${encodeURIComponent(id)}/estimate` },
+  catalogue: { path: '/catalogue', build: () => '/catalogue' },
+  newCatalogueOperation: { path: '/catalogue/new', build: () => '/catalogue/new' },
+  catalogueOperation: { path: '/catalogue/:id', build: (id: string) => `/catalogue/${encodeURIComponent(id)}` },
+  /** The client's private page behind the link e-mailed with an estimate: public, no app navigation. */
+  clientPage: { path: '/c/:token', build: (token: string) => `/c/${encodeURIComponent(token)}` },
   stagesSettings: { path: '/settings/stages', build: () => '/settings/stages' },
   wallScreensSettings: { path: '/settings/wall-screens', build: () => '/settings/wall-screens' },
   profile: { path: '/profile', build: () => '/profile' },
@@ -70,7 +78,7 @@ function withQuery(path: string, params: Record<string, string | undefined>): st
   return search ? `${path}?${search}` : path;
 }
 
-const PUBLIC_PREFIXES = ['/sign-in', '/sign-up', '/reset-password', '/invitations/'];
+const PUBLIC_PREFIXES = ['/sign-in', '/sign-up', '/reset-password', '/invitations/', '/c/'];
 /** The wall screen runs on its device cookie, never a member session, so it never bounces to sign-in. */
 const PUBLIC_EXACT = ['/wall'];
 

@@ -11,6 +11,7 @@ import { pianoQueryOptions, usePiano } from '@/features/pianos/api/get-piano';
 import { PianoDetails } from '@/features/pianos/components/piano-details';
 import { PianoForm } from '@/features/pianos/components/piano-form';
 import { PianoJobs } from '@/features/pianos/components/piano-jobs';
+import { PianoSurveys } from '@/features/surveys/components/piano-surveys';
 import { pianoName } from '@/lib/piano';
 import { canRunBoard } from '@/lib/roles';
 import { showToast } from '@/lib/toast';
@@ -55,12 +56,17 @@ export function Component() {
         title={name}
         description={`${data.clientName}’s piano`}
         actions={
-          canEdit && !isEditing ? (
+          isEditing ? undefined : (
             <>
-              <ButtonLink to={paths.newJob.build({ pianoId: data.id })}>Start a job</ButtonLink>
-              <Button variant="secondary" onClick={() => setIsEditing(true)}>Edit piano</Button>
+              <ButtonLink to={paths.newSurvey.build(data.id)}>Start a survey</ButtonLink>
+              {canEdit && (
+                <>
+                  <ButtonLink to={paths.newJob.build({ pianoId: data.id })} variant="secondary">Start a job</ButtonLink>
+                  <Button variant="secondary" onClick={() => setIsEditing(true)}>Edit piano</Button>
+                </>
+              )}
             </>
-          ) : undefined
+          )
         }
       />
       <div className="grid gap-10 lg:grid-cols-2">
@@ -83,6 +89,10 @@ export function Component() {
         <section aria-labelledby="piano-jobs-heading" className="space-y-3">
           <h2 id="piano-jobs-heading" className="text-lg font-semibold">Job history</h2>
           <PianoJobs piano={data} />
+        </section>
+        <section aria-labelledby="piano-surveys-heading" className="space-y-3 lg:col-span-2">
+          <h2 id="piano-surveys-heading" className="text-lg font-semibold">Condition surveys</h2>
+          <PianoSurveys pianoId={data.id} />
         </section>
       </div>
     </>
