@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { EMPTY_STOCK, issueStock, receiveStock, PartDetail, PartList, StockMovementResult, TaskPartsUsed, type Part } from '@keybed/shared';
+import { EMPTY_STOCK, issueStock, receiveStock, PartDetail, PartList, StockMovementResult, TaskPartsUsed, WallPartList, type Part } from '@keybed/shared';
 import { pairWall, setPin } from './bench-fixtures';
 import { createJob } from './board-fixtures';
 import { createTestApp, type TestApp } from './helpers';
@@ -262,15 +262,16 @@ describe('POST /api/tasks/:id/parts-used/corrections', () => {
 });
 
 describe('POST /api/wall/parts-used', () => {
-  it('when a technician at the wall screen logs a part with their PIN, then it is recorded; a wrong PIN records nothing', async () => {
+  it('when a technician at the wall screen picks a part (low stock marked) and logs it with their PIN, then it is recorded; a wrong PIN records nothing', async () => {
     const other = await moneyWorkshop(t);
     await setPin(other.owner.agent, other.declan.userId, '135790');
-    const part = await createPart(other.owner.agent, { ...SCENARIO_PARTS.wire16 });
+    const part = await createPart(other.owner.agent, { ...SCENARIO_PARTS.wire16, reorderLevelMilli: 4000 });
     await receive(other.owner.agent, part.id, 4000);
     const { task } = await priyasTask(other);
     const wall = await pairWall(t, other.owner);
-    const parts = (await wall.agent.get('/api/wall/parts').expect(200)).body;
-    expect(parts.parts).toEqual([{ id: part.id, sku: 'MW-16', name: 'Music wire, plain steel, size 16', unit: 'coil (1 lb)', onHandMilli: 4000 }]);
+    // On hand at the reorder level counts as low stock.
+    const parts = WallPartList.parse((await wall.agent.get('/api/wall/parts').expect(200)).body);
+    expect(parts.parts).toEqual([{ id: part.id, sku: 'MW-16', name: 'Music wire, plain steel, size 16', unit: 'coil (1 lb)', onHandMilli: 4000, isLowStock: true }]);
     const wrong = await wall.agent.post('/api/wall/parts-used').send({ technicianId: other.declan.userId, pin: '000000', taskId: task.id, partId: part.id, quantityMilli: 1000 });
     expect(errorOf(wrong.body).code).toBe('pin_incorrect');
     const res = await wall.agent.post('/api/wall/parts-used').send({ technicianId: other.declan.userId, pin: '135790', taskId: task.id, partId: part.id, quantity: 1 }).expect(201);

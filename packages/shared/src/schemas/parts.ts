@@ -201,9 +201,11 @@ export const TaskPartsUsed = z.object({
 });
 export type TaskPartsUsed = z.infer<typeof TaskPartsUsed>;
 
-/** The wall screen's parts picker: active parts, no money. */
-export const WallPart = z.object({ id: z.string(), sku: z.string(), name: z.string(), unit: z.string(), onHandMilli: z.number() });
+/** The wall screen's parts picker: active parts, no money; low stock is on hand at or below the reorder level. */
+export const WallPart = z.object({ id: z.string(), sku: z.string(), name: z.string(), unit: z.string(), onHandMilli: z.number(), isLowStock: z.boolean() });
 export type WallPart = z.infer<typeof WallPart>;
+export const WallPartList = z.object({ parts: z.array(WallPart) });
+export type WallPartList = z.infer<typeof WallPartList>;
 
 /** `POST /api/wall/parts-used`: the technician's PIN, the task and the part. */
 export const WallPartsUsedInput = withQuantity(

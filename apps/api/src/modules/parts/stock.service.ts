@@ -183,10 +183,13 @@ export function createStockService({ repo, pins, now }: Deps) {
       };
     },
 
-    /** The wall screen's picker: active parts and what is on hand, no money. */
+    /** The wall screen's picker: active parts, what is on hand and whether that is low, no money. */
     async wallParts(wall: WallContext): Promise<WallPart[]> {
       const rows = await repo.list(wall.workshopId, { include: 'active' });
-      return rows.map((p) => ({ id: p.id, sku: p.sku, name: p.name, unit: p.unit, onHandMilli: Number(p.onHandMilli) }));
+      return rows.map((p) => {
+        const onHandMilli = Number(p.onHandMilli);
+        return { id: p.id, sku: p.sku, name: p.name, unit: p.unit, onHandMilli, isLowStock: onHandMilli <= p.reorderLevelMilli };
+      });
     },
 
     /** A technician at the wall screen logs parts on an open task of an active job, confirming with their PIN. */

@@ -1,4 +1,4 @@
-import { ClockResult, WallPinCheck, type WallClockOffInput, type WallClockOnInput } from '@keybed/shared';
+import { ClockResult, StockMovementResult, WallPinCheck, type WallClockOffInput, type WallClockOnInput, type WallPartsUsedInput } from '@keybed/shared';
 import { api } from '@/lib/api-client';
 
 /*
@@ -13,3 +13,6 @@ export const verifyPin = (technicianId: string, pin: string) =>
 export const wallClockOn = (input: WallClockOnInput) => api.post('/wall/clock-on', input, ClockResult);
 
 export const wallClockOff = (input: WallClockOffInput) => api.post('/wall/clock-off', input, ClockResult);
+
+/** Parts used on a task, confirmed with the PIN held for this turn; answers the movement and the part's stock. */
+export const wallLogPart = (input: WallPartsUsedInput) => api.post('/wall/parts-used', input, StockMovementResult);

@@ -1,15 +1,18 @@
 import { elapsedHoursMinutes } from '@/lib/duration';
 import type { ShownRunning } from '../lib/clock-queue';
+import { LogPartButton } from './log-part-button';
 
 interface RunningNowProps {
   shown: ShownRunning;
   now: number;
   isBusy: boolean;
   onClockOff: () => void;
+  /** Absent when parts cannot be logged now (no network). */
+  onLogPart?: (() => void) | undefined;
 }
 
-/** What the technician is on, for how long, and the one big button to stop it. */
-export function RunningNow({ shown, now, isBusy, onClockOff }: RunningNowProps) {
+/** What the technician is on, for how long, the big button to stop it, and the one to log a part to it. */
+export function RunningNow({ shown, now, isBusy, onClockOff, onLogPart }: RunningNowProps) {
   return (
     <section aria-labelledby="wall-running-now" className="flex flex-wrap items-center gap-6 rounded-xl bg-felt p-6 text-white">
       <div className="min-w-0 flex-1">
@@ -20,6 +23,7 @@ export function RunningNow({ shown, now, isBusy, onClockOff }: RunningNowProps) 
         <p className="text-xl">{shown.jobTitle}</p>
         <p className="text-wall-lg font-bold tabular-figures">{elapsedHoursMinutes(shown.startedAt, now)}</p>
       </div>
+      {onLogPart && <LogPartButton isOnBand isBusy={isBusy} onClick={onLogPart} />}
       <button
         type="button"
         onClick={onClockOff}

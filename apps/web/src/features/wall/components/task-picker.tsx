@@ -8,17 +8,19 @@ import { TaskButton } from './task-button';
 interface TaskPickerProps {
   tasks: readonly WallTask[];
   runningTaskId: string | undefined;
+  /** Whether the task they are on can be picked (to log a part to it), not only shown. */
+  canPickRunning?: boolean;
   isBusy: boolean;
   onPick: (task: WallTask) => void;
 }
 
 /** The technician's own open tasks first, then any open task of an active job; searchable. */
-export function TaskPicker({ tasks, runningTaskId, isBusy, onPick }: TaskPickerProps) {
+export function TaskPicker({ tasks, runningTaskId, canPickRunning = false, isBusy, onPick }: TaskPickerProps) {
   const [query, setQuery] = useState('');
   const { assigned, others } = groupTasks(matchTasks(tasks, query));
   const button = (task: WallTask) => (
     <li key={task.id}>
-      <TaskButton task={task} isRunning={task.id === runningTaskId} isBusy={isBusy} onPick={() => onPick(task)} />
+      <TaskButton task={task} isRunning={task.id === runningTaskId} canPickRunning={canPickRunning} isBusy={isBusy} onPick={() => onPick(task)} />
     </li>
   );
   return (

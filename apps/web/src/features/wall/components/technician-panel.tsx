@@ -38,7 +38,7 @@ function useIdleClose(onIdle: () => void, isPaused: boolean) {
   return { secondsLeft, now };
 }
 
-/** One technician's turn: PIN, then their tasks and clock off. Closes after the action or 30 s idle. */
+/** One technician's turn: PIN, then their tasks, clock off and parts used. Closes after a clock action or 30 s idle. */
 export function TechnicianPanel(props: TechnicianPanelProps) {
   const { technician, onClose } = props;
   const titleId = useId();
@@ -84,7 +84,7 @@ export function TechnicianPanel(props: TechnicianPanelProps) {
           <PinPad pin={digits} onChange={enter} onSubmit={() => isPinComplete(digits) && enter(digits)} isBusy={session.isBusy} message={session.step.message} />
         )}
         {session.step.name === 'tasks' && (
-          <TasksStep step={session.step} technician={technician} waiting={props.queue.actions} now={now} isBusy={session.isBusy} onClockOn={session.clockOn} onClockOff={session.clockOff} />
+          <TasksStep step={session.step} technician={technician} waiting={props.queue.actions} now={now} isBusy={session.isBusy} onClockOn={session.clockOn} onClockOff={session.clockOff} onLogPart={session.logPart} />
         )}
       </div>
     </div>

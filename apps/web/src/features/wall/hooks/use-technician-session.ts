@@ -1,9 +1,10 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { WallTask, WallTechnician, WallTechnicianTasks } from '@keybed/shared';
 import { isApiError } from '@/lib/api-client';
-import { verifyPin } from '../api/wall-actions';
+import { verifyPin, wallLogPart } from '../api/wall-actions';
 import { holdGrant, stampAction, type HeldGrant } from '../lib/clock-grant';
 import { waitingFor } from '../lib/clock-queue';
+import { isWhoRefusal, loggedText, partRefusalText, type PartUse } from '../lib/part-messages';
 import { isNetworkFailure } from '../lib/send-outcome';
 import { lockedMinutes, lockedText, noPinText, wallErrorText } from '../lib/wall-messages';
 import { savedText, waitingReportText, type WallNotice } from '../lib/wall-notice';
@@ -15,6 +16,9 @@ export type SessionStep =
   | { name: 'pin'; message?: string | undefined }
   /** `data` is null when offline and this screen has no task list for them yet. */
   | { name: 'tasks'; data: WallTechnicianTasks | null; isOffline: boolean; note?: string | undefined };
+
+/** What came of logging parts used: recorded, refused (why, in plain words), or the turn went back to the PIN. */
+export type LogPartOutcome = { kind: 'logged' } | { kind: 'refused'; text: string } | { kind: 'ended' };
 
 /** Refusals that leave nothing to try on the pad. */
 const BLOCKING = new Set(['pin_locked', 'pin_not_set', 'wall_pin_limit']);
@@ -129,6 +133,32 @@ export function useTechnicianSession({ technician, queue, cachedTasks, onTasksLo
     [queue, technician.id, name, onClose, failed],
   );
 
+  /**
+   * Logs parts used with the PIN held for this turn (parts are never kept on the screen to send
+   * later); a logged part is said in the panel's status line and the turn stays open.
+   */
+  const logPart = useCallback(
+    async (use: PartUse): Promise<LogPartOutcome> => {
+      if (!pin.current) {
+        setStep({ name: 'pin' });
+        return { kind: 'ended' };
+      }
+      setIsBusy(true);
+      try {
+        await wallLogPart({ technicianId: technician.id, pin: pin.current, taskId: use.task.id, partId: use.part.id, quantityMilli: use.quantityMilli });
+        setStep((s) => (s.name === 'tasks' ? { ...s, note: loggedText(use) } : s));
+        return { kind: 'logged' };
+      } catch (error) {
+        if (!isWhoRefusal(error)) return { kind: 'refused', text: partRefusalText(error, use.part) };
+        failed(error);
+        return { kind: 'ended' };
+      } finally {
+        setIsBusy(false);
+      }
+    },
+    [technician.id, failed],
+  );
+
   const clockOn = (task: WallTask) =>
     act({ kind: 'clock-on', technician: { id: technician.id, name }, task: { id: task.id, title: task.title, jobTitle: task.job.title } }, `${name} is on ${task.title}.`);
   const clockOff = () => act({ kind: 'clock-off', technician: { id: technician.id, name } }, `${name} clocked off.`);
@@ -149,5 +179,5 @@ export function useTechnicianSession({ technician, queue, cachedTasks, onTasksLo
     };
   }, [check, technician.id]);
 
-  return { step, isBusy, check, clockOn, clockOff };
+  return { step, isBusy, check, clockOn, clockOff, logPart };
 }

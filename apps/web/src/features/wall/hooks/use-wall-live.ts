@@ -17,8 +17,8 @@ function parse(data: unknown): LiveEvent | undefined {
 
 /**
  * The screen's own live event stream (its device session may not use the members' one). Clock
- * changes anywhere refresh who is on what; answers whether the stream is open, so the screen
- * can poll more often while it is not.
+ * changes anywhere refresh who is on what, stock changes the parts to log; answers whether the
+ * stream is open, so the screen can poll more often while it is not.
  */
 export function useWallLive(isEnabled: boolean): boolean {
   const queryClient = useQueryClient();
@@ -41,6 +41,7 @@ export function useWallLive(isEnabled: boolean): boolean {
       source.onmessage = (message) => {
         const event = parse(message.data);
         if (event?.kind === 'time.changed' || event?.kind === 'task.changed') refresh();
+        if (event?.kind === 'part.changed') void queryClient.invalidateQueries({ queryKey: wallKeys.parts() });
       };
       source.onerror = () => {
         setIsLive(false);
