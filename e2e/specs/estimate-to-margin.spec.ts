@@ -41,6 +41,11 @@ test('the owner prices a job with two options, the wall logs time and a part, an
   );
   expect(tasks.tasks.map((x) => x.title)).not.toContain(`Recover the hammers ${t}`);
 
+  // A delivery of one hammer set at the scenario's unit cost, so the wall has one to log.
+  const parts = await owner.get<{ parts: Array<{ id: string; name: string }> }>(`/api/parts?q=${encodeURIComponent(HAMMER_SET)}`);
+  const hammerSet = parts.parts.find((p) => p.name === HAMMER_SET)!;
+  await owner.post(`/api/parts/${hammerSet.id}/movements`, { kind: 'received', quantityMilli: 1000, unitCostMinor: 52000 });
+
   const before = (await owner.get<{ money: { costToDateMinor: number; priceMinor: number } }>(`/api/jobs/${job.id}/costing`)).money;
   // Price: (8 + 10) h at the demo charge-out rate of £55/h.
   expect(before.priceMinor).toBe(18 * 5500);
