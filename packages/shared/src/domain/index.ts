@@ -16,3 +16,4 @@ export * from './quantity';
 export * from './estimate';
 export * from './job-budget';
 export * from './utilisation';
+export * from './safety';
