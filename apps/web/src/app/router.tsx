@@ -70,6 +70,7 @@ export function createRouter(queryClient: QueryClient) {
                 { path: paths.workshopSettings.path, lazy: lazy(() => import('./routes/workshop-settings')) },
                 { path: paths.profile.path, lazy: lazy(() => import('./routes/profile')) },
                 { path: paths.ivoryHelp.path, lazy: lazy(() => import('./routes/ivory-help')) },
+                { path: paths.safetyHelp.path, lazy: lazy(() => import('./routes/safety-help')) },
               ],
             },
           ],

@@ -69,6 +69,7 @@ export const paths = {
   wall: { path: '/wall', build: () => '/wall' },
   wallPair: { path: '/wall/pair', build: () => '/wall/pair' },
   ivoryHelp: { path: '/help/ivory', build: () => '/help/ivory' },
+  safetyHelp: { path: '/help/safety', build: (anchor?: string) => (anchor ? `/help/safety#${encodeURIComponent(anchor)}` : '/help/safety') },
 } as const;
 
 function withQuery(path: string, params: Record<string, string | undefined>): string {

@@ -1,9 +1,11 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { cautionsForStage } from '@keybed/shared';
 import { ButtonLink } from '@/components/button';
 import { ErrorState } from '@/components/error-state';
 import { PageHeader } from '@/components/page-header';
 import { RegionBoundary } from '@/components/region-boundary';
+import { SafetyCautions } from '@/components/safety-caution';
 import { LoadingRegion, Skeleton } from '@/components/skeleton';
 import { paths } from '@/config/paths';
 import { useSignedInMember } from '@/features/auth/hooks/use-signed-in-member';
@@ -91,6 +93,8 @@ export function Component() {
         description={`${STATUS_LABELS[data.status]}${isOnBoard && stageName ? ` · in ${stageName}` : ''} · ${data.client.name}`}
         actions={back}
       />
+      {/* A job in a delivery or collection stage is about to be moved: say so before anything else. */}
+      {isOnBoard && <SafetyCautions variant="panel" cautions={cautionsForStage(stageName)} className="mb-6 max-w-prose" />}
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-8">
           <section aria-labelledby="job-tasks-heading" className="space-y-3">

@@ -1,7 +1,8 @@
 import type { RunningEntry, Task, TaskStatus } from '@keybed/shared';
-import { formatHoursMinutes } from '@keybed/shared';
+import { cautionsForTask, formatHoursMinutes } from '@keybed/shared';
 import { Button } from '@/components/button';
 import { Field } from '@/components/field';
+import { SafetyCautions } from '@/components/safety-caution';
 import { Select } from '@/components/select';
 import { cx } from '@/lib/cx';
 import { elapsedHoursMinutes } from '@/lib/duration';
@@ -34,7 +35,7 @@ function Hours({ task }: { task: Task }) {
   );
 }
 
-/** One task: what, which stage, who, hours against the estimate, status, and who is on it now. */
+/** One task: what, which stage, who, hours against the estimate, status, any safety caution, and who is on it now. */
 export function TaskRow(props: TaskRowProps) {
   const { task, canEdit, canSetStatus, runningOn, now } = props;
   const assignees = task.assignees.map((a) => a.name).join(', ');
@@ -46,6 +47,7 @@ export function TaskRow(props: TaskRowProps) {
         <p className="text-sm text-graphite-600">
           {task.stage?.name ?? 'No stage'} · {assignees || 'Nobody assigned'} · <Hours task={task} />
         </p>
+        {task.status !== 'done' && <SafetyCautions cautions={cautionsForTask(task.title, task.stage?.name)} className="mt-1" />}
         {runningOn.map((r) => (
           <p key={r.entryId} className="mt-1 inline-flex items-center gap-2 rounded bg-felt px-2 py-0.5 text-sm font-semibold text-white">
             <span aria-hidden="true" className="size-2 rounded-full bg-white" />

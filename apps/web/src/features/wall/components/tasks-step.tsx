@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { WallTask, WallTechnician } from '@keybed/shared';
+import { cautionsForTask, type WallTask, type WallTechnician } from '@keybed/shared';
 import { cx } from '@/lib/cx';
 import { shownRunning, waitingFor, type QueuedClockAction } from '../lib/clock-queue';
 import type { LogPartOutcome, SessionStep } from '../hooks/use-technician-session';
@@ -8,6 +8,7 @@ import { LogPartButton } from './log-part-button';
 import { LogPartStep } from './log-part-step';
 import { RunningNow } from './running-now';
 import { TaskPicker } from './task-picker';
+import { WallCautions } from './wall-cautions';
 
 interface TasksStepProps {
   step: Extract<SessionStep, { name: 'tasks' }>;
@@ -20,7 +21,7 @@ interface TasksStepProps {
   onLogPart: (use: PartUse) => Promise<LogPartOutcome>;
 }
 
-/** After the PIN: what they are on (with Clock off and Log a part), and the tasks to clock on to. */
+/** After the PIN: what they are on (with Clock off, Log a part and any safety caution), and the tasks to clock on to. */
 export function TasksStep({ step, technician, waiting, now, isBusy, onClockOn, onClockOff, onLogPart }: TasksStepProps) {
   const [isLogging, setIsLogging] = useState(false);
   const mine = waitingFor(waiting, technician.id);
@@ -30,6 +31,9 @@ export function TasksStep({ step, technician, waiting, now, isBusy, onClockOn, o
   // Parts are logged with the PIN checked just now, never kept on the screen to send later.
   const canLogParts = !step.isOffline && step.data !== null;
   const startLogging = canLogParts ? () => setIsLogging(true) : undefined;
+  // The task's stage, when the list has it, adds the moving caution to work in a delivery stage.
+  const runningStage = step.data?.tasks.find((t) => t.id === runningTaskId)?.stage?.name;
+  const cautions = shown ? cautionsForTask(shown.taskTitle, runningStage) : [];
   const note = isLogging ? undefined : step.note;
   return (
     <div className="mx-auto max-w-7xl space-y-6">
@@ -48,6 +52,7 @@ export function TasksStep({ step, technician, waiting, now, isBusy, onClockOn, o
       ) : (
         <>
           {shown && <RunningNow shown={shown} now={now} isBusy={isBusy} onClockOff={onClockOff} onLogPart={startLogging} />}
+          <WallCautions cautions={cautions} />
           {!shown && startLogging && <LogPartButton isBusy={isBusy} onClick={startLogging} />}
           <h3 className="text-wall-sm font-bold">{shown ? 'Or switch to another task' : 'Tap a task to clock on'}</h3>
           {step.data ? (
