@@ -77,7 +77,7 @@ export function createApp({ config, db, sql, mailer, logger, now = () => new Dat
   const stages = createStagesService({ repo: createStagesRepo(db), now, changed });
   const technicians = createTechnicianLookup(db);
   const jobs = createJobsService({ repo: createJobsRepo(db), technicians, now, changed });
-  const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians, cache: boardCache });
+  const board = createBoardService({ repo: createBoardRepo(db, technicians), technicians, cache: boardCache, now });
   const bench = createBench({ db, live, sessions, logger, limits: config.limits, now, changed });
   const money = createMoney({ db, logger, limits: config.limits, now, changed });
   const assessments = createAssessments({ config, db, mailer, logger, now, changed });

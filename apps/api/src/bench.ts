@@ -29,7 +29,7 @@ interface BenchDeps {
   logger: Logger;
   limits: Config['limits'];
   now: () => Date;
-  /** Told after a committed change that may alter the board (task assignees and status). */
+  /** Told after a committed change that may alter the board (task assignees, status, estimates and logged minutes). */
   changed?: (workshopId: string) => void;
 }
 
@@ -42,8 +42,8 @@ export function createBench({ db, live, sessions, logger, limits, now, changed }
   const timeRepo = createTimeRepo(db);
   const templates = createTaskTemplatesService({ repo: createTaskTemplatesRepo(db), now });
   const tasks = createTasksService({ repo: createTasksRepo(db), templates: createTaskTemplatesRepo(db), now, changed });
-  const clock = createClockService({ repo: timeRepo, now });
-  const entries = createEntriesService({ repo: timeRepo, now });
+  const clock = createClockService({ repo: timeRepo, now, changed });
+  const entries = createEntriesService({ repo: timeRepo, now, changed });
   const timesheets = createTimesheetsService({ repo: timeRepo, now });
   const pins = createPinsService({ repo: createPinsRepo(db), logger, now, devicePerHour: limits.wallPinFailuresPerDevicePerHour });
   const wall = createWallService({ repo: createWallRepo(db), pins, clock, logger, now });

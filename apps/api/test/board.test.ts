@@ -1,18 +1,32 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Board } from '@keybed/shared';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { Board, Task } from '@keybed/shared';
 import { createApp } from '../src/app';
 import { createLogger } from '../src/lib/logger';
+import { createClockService } from '../src/modules/time/clock.service';
+import { createEntriesService } from '../src/modules/time/entries.service';
+import { createTimeRepo } from '../src/modules/time/time.repo';
 import { createSmtpMailer } from '../src/lib/mail';
 import supertestRequest from 'supertest';
 import type supertest from 'supertest';
 import { activeStages, createClient, createJob, createPiano, fillStage } from './board-fixtures';
+import { benchWorkshop, clockOn, createTask, insertEntry } from './bench-fixtures';
 import { addMember, createTestApp, signUpWorkshop, type TestApp } from './helpers';
+import { ANY_MONEY, keysMatching } from './money-fixtures';
 import { ErrorBody } from './schemas';
+
+/** The app's clock: the real one unless a test sets `ms`. */
+const clock: { ms: number | null } = { ms: null };
+const setClock = (iso: string) => {
+  clock.ms = Date.parse(iso);
+};
 
 let t: TestApp;
 let statements: string[] = [];
 beforeAll(async () => {
-  t = await createTestApp({ onQuery: (query) => statements.push(query) });
+  t = await createTestApp({ onQuery: (query) => statements.push(query), now: () => new Date(clock.ms ?? Date.now()) });
+});
+afterEach(() => {
+  clock.ms = null;
 });
 afterAll(() => t.close());
 
@@ -107,8 +121,8 @@ describe('GET /api/board', () => {
     await t.request().get('/api/board').expect(401);
   });
 
-  it('when the board holds 2 or 42 jobs, then it takes the same number of SQL statements', async () => {
-    const { agent } = await signUpWorkshop(t);
+  it('when the board holds 2 or 42 jobs, with or without tasks and time, then it takes the same number of SQL statements', async () => {
+    const { agent, me } = await signUpWorkshop(t);
     const stages = await activeStages(agent);
     await fillStage(agent, stages[0]!.id, 2);
     const count = async () => {
@@ -122,6 +136,15 @@ describe('GET /api/board', () => {
     expect(row!.n).toBe(42);
     const withFortyTwo = await count();
     expect(withFortyTwo).toBe(withTwo);
+    const onBoard = (await boardOf(agent)).stages.flatMap((s) => s.jobs).slice(0, 20);
+    for (const [i, job] of onBoard.entries()) {
+      const task = await createTask(agent, job.id, { estimatedMinutes: 120 });
+      const hour = Date.parse('2026-03-02T08:00:00Z') + i * 3600_000;
+      const slot = { startedAt: new Date(hour).toISOString(), endedAt: new Date(hour + 1800_000).toISOString() };
+      await insertEntry(t, { workshopId: me.workshop.id, technicianId: me.user.id, taskId: task.id, jobId: job.id, ...slot });
+    }
+    const withHours = await count();
+    expect(withHours).toBe(withTwo);
     expect(withTwo).toBeLessThanOrEqual(6);
   });
 
@@ -185,3 +208,75 @@ describe('GET /api/board', () => {
   });
 });
 
+describe('GET /api/board: hours on the cards', () => {
+  const cardOf = (board: Board, jobId: string) => board.stages.flatMap((s) => s.jobs).find((j) => j.id === jobId)!;
+
+  it('when a job has tasks and time, then every role sees its estimated minutes and its logged minutes, running entries up to now, and no money', async () => {
+    const w = await benchWorkshop(t);
+    setClock('2026-03-02T10:00:00Z');
+    const job = await createJob(w.owner.agent, { title: 'New hammers, rebush, full regulation' });
+    const idle = await createJob(w.owner.agent, { title: 'Rebush, new dampers, pitch raise' });
+    const hammers = await createTask(w.owner.agent, job.id, { title: 'Hang new hammers', estimatedMinutes: 360 });
+    const rebush = await createTask(w.owner.agent, job.id, { title: 'Rebush keys', estimatedMinutes: 90 });
+    await createTask(w.owner.agent, job.id, { title: 'Check the trapwork', estimatedMinutes: null });
+    const base = { workshopId: w.workshopId, jobId: job.id };
+    // 75 min 30 s counts 75 whole minutes; the running entry 39 min 15 s up to 10:00 counts 39.
+    await insertEntry(t, { ...base, technicianId: w.priya.userId, taskId: hammers.id, startedAt: '2026-03-02T08:00:00Z', endedAt: '2026-03-02T09:15:30Z' });
+    await insertEntry(t, { ...base, technicianId: w.declan.userId, taskId: rebush.id, startedAt: '2026-03-02T09:20:45Z', endedAt: null });
+
+    for (const agent of [w.owner.agent, w.foreman.agent, w.priya.agent]) {
+      const board = await boardOf(agent);
+      expect(cardOf(board, job.id).hours).toEqual({ estimatedMinutes: 450, loggedMinutes: 114 });
+      expect(cardOf(board, idle.id).hours).toEqual({ estimatedMinutes: 0, loggedMinutes: 0 });
+      expect(keysMatching(board, ANY_MONEY)).toEqual([]);
+    }
+    expect(cardOf(await boardOf(w.owner.agent, '?q=hammers'), job.id).hours).toEqual({ estimatedMinutes: 450, loggedMinutes: 114 });
+    const costing = (await w.owner.agent.get(`/api/jobs/${job.id}/costing`).expect(200)).body as { hours: { estimatedMinutes: number; actualMinutes: number } };
+    expect(costing.hours).toMatchObject({ estimatedMinutes: 450, actualMinutes: 114 });
+  });
+
+  it('when someone clocks on or off, a time entry is corrected or a task’s estimate changes, then the very next board read shows the new hours', async () => {
+    const w = await benchWorkshop(t);
+    setClock('2026-03-02T10:00:00Z');
+    const job = await createJob(w.owner.agent);
+    const task = await createTask(w.foreman.agent, job.id, { estimatedMinutes: 360, assigneeIds: [w.priya.userId] });
+    const hours = async () => cardOf(await boardOf(w.owner.agent), job.id).hours;
+    expect(await hours()).toEqual({ estimatedMinutes: 360, loggedMinutes: 0 });
+
+    const on = await clockOn(w.priya.agent, task.id, { at: '2026-03-02T09:15:00Z' });
+    expect(await hours()).toEqual({ estimatedMinutes: 360, loggedMinutes: 45 });
+
+    setClock('2026-03-02T10:30:00Z');
+    await w.priya.agent.post('/api/time/clock-off').send({ at: '2026-03-02T10:10:00Z' }).expect(200);
+    expect(await hours()).toEqual({ estimatedMinutes: 360, loggedMinutes: 55 });
+
+    await w.foreman.agent.patch(`/api/time/entries/${on.entry.id}`).send({ endedAt: '2026-03-02T10:20:00Z', reason: 'Stayed to finish the hammer line' }).expect(200);
+    expect(await hours()).toEqual({ estimatedMinutes: 360, loggedMinutes: 65 });
+
+    const current = Task.parse((await w.foreman.agent.get(`/api/jobs/${job.id}/tasks`).expect(200)).body.tasks[0]);
+    await w.foreman.agent.patch(`/api/tasks/${task.id}`).send({ version: current.version, estimatedMinutes: 480 }).expect(200);
+    expect(await hours()).toEqual({ estimatedMinutes: 480, loggedMinutes: 65 });
+  });
+
+  it('when a clock action or a correction commits, then the board is dropped in this process at once, not only when the notification comes back; a refused one drops nothing', async () => {
+    const w = await benchWorkshop(t);
+    setClock('2026-03-02T10:00:00Z');
+    const job = await createJob(w.owner.agent);
+    const task = await createTask(w.foreman.agent, job.id, { assigneeIds: [w.priya.userId] });
+    const dropped: string[] = [];
+    const deps = { repo: createTimeRepo(t.db), now: () => new Date(clock.ms!), changed: (workshopId: string) => dropped.push(workshopId) };
+    const clockService = createClockService(deps);
+    const entries = createEntriesService(deps);
+    const actor = { workshopId: w.workshopId, technicianId: w.priya.userId, byUserId: w.priya.userId, source: 'web' as const };
+
+    await expect(clockService.clockOff(actor, {})).rejects.toMatchObject({ code: 'not_running' });
+    expect(dropped).toEqual([]);
+    const { result } = await clockService.clockOn(actor, { taskId: task.id, at: '2026-03-02T09:00:00Z' });
+    expect(dropped).toEqual([w.workshopId]);
+    await clockService.clockOff(actor, {});
+    expect(dropped).toEqual([w.workshopId, w.workshopId]);
+    const foreman = { userId: w.foreman.userId, workshopId: w.workshopId, role: 'foreman' as const, membershipId: '', sessionId: '' };
+    await entries.correct(foreman, result.entry.id, { endedAt: '2026-03-02T09:50:00Z', reason: 'Left for lunch at ten to' });
+    expect(dropped).toHaveLength(3);
+  });
+});

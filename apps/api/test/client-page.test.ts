@@ -3,12 +3,13 @@ import type { AddressInfo } from 'node:net';
 import Stripe from 'stripe';
 import { extractText, getDocumentProxy } from 'unpdf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ClientPage, Estimate, EstimateProposal, JobDetail, JobPayments } from '@keybed/shared';
+import { Board, ClientPage, Estimate, EstimateProposal, JobCosting, JobDetail, JobPayments } from '@keybed/shared';
 import { startFakePayments, type FakePayments } from '../../../scripts/fakes/payments.mjs';
 import { preparedEstimate, surveyedGrand } from './assessment-fixtures';
+import { createJob } from './board-fixtures';
 import { scenarioCatalogue } from './catalogue-fixtures';
 import { createTestApp, waitForMail, type TestApp } from './helpers';
-import { moneyWorkshop, type MoneyWorkshop } from './money-fixtures';
+import { ANY_MONEY, keysMatching, moneyWorkshop, type MoneyWorkshop } from './money-fixtures';
 import { ErrorBody } from './schemas';
 import { componentOf } from './survey-fixtures';
 
@@ -224,6 +225,85 @@ describe('POST /api/client/:token/accept', () => {
   });
 });
 
+describe('POST /api/estimates/:id/accept on a job waiting for the client', () => {
+  /** Everything acceptance leaves on the job and the board, whichever way it came. */
+  async function placement(agent: MoneyWorkshop['owner']['agent'], jobId: string) {
+    const job = JobDetail.parse((await agent.get(`/api/jobs/${jobId}`).expect(200)).body);
+    const board = Board.parse((await agent.get('/api/board').expect(200)).body);
+    const stage = board.stages.find((st) => st.jobs.some((j) => j.id === jobId));
+    const tasks = await t.sql`select title, estimated_minutes from tasks where job_id = ${jobId} order by position`;
+    return {
+      status: job.status,
+      stage: stage?.name,
+      isFirstStage: stage?.id === board.stages[0]?.id,
+      position: job.position,
+      isLastCard: stage?.jobs.at(-1)?.id === jobId,
+      events: job.history.map((h) => [h.fromStage?.name ?? null, h.toStage.name, h.by?.name ?? null]),
+      tasks: tasks.map((r) => [r.title, r.estimated_minutes]),
+      hours: stage?.jobs.find((j) => j.id === jobId)?.hours,
+    };
+  }
+
+  const chosen = (estimate: Estimate) => ['Recover the old ones', 'Strip and refinish in black polyester'].map((name) => estimate.options.find((o) => o.name === name)!.id);
+  const expected = (by: string | null) => ({
+    status: 'active',
+    stage: 'Intake',
+    isFirstStage: true,
+    position: 1,
+    isLastCard: true,
+    events: [[null, 'Intake', by]],
+    tasks: [
+      ['Rebush keys', 360],
+      ['Full regulation', 600],
+    ],
+    hours: { estimatedMinutes: 960, loggedMinutes: 0 },
+  });
+
+  it('when the owner accepts in the app, then the job joins the end of the first active stage with its stage event, tasks, budgets and hours, exactly as through the client’s link', async () => {
+    const viaLink = await setUp();
+    await createJob(viaLink.w.owner.agent, { title: 'Tuning and a check-over' });
+    const { token } = await sendAndOpen(viaLink.w.owner.agent, viaLink.estimate.id, viaLink.email);
+    await t.request().post(`/api/client/${token}/accept`).send({ optionIds: chosen(viaLink.estimate), name: 'Harriet Pembleton' }).expect(200);
+
+    const inApp = await setUp();
+    await createJob(inApp.w.owner.agent, { title: 'Tuning and a check-over' });
+    await inApp.w.owner.agent.post(`/api/estimates/${inApp.estimate.id}/issue`).expect(200);
+    const accepted = Estimate.parse((await inApp.w.owner.agent.post(`/api/estimates/${inApp.estimate.id}/accept`).send({ optionIds: chosen(inApp.estimate) }).expect(200)).body);
+    expect(accepted).toMatchObject({ status: 'accepted', totals: { netMinor: 321000 } });
+
+    expect(await placement(viaLink.w.owner.agent, viaLink.jobId)).toEqual(expected(null));
+    expect(await placement(inApp.w.owner.agent, inApp.jobId)).toEqual(expected('Margaret Oyelaran'));
+  });
+
+  it('when the owner accepts in the app and the client through the link at the same moment, then one acceptance, one place on the board and one set of tasks', async () => {
+    const s = await setUp();
+    const { token } = await sendAndOpen(s.w.owner.agent, s.estimate.id, s.email);
+    const optionIds = chosen(s.estimate);
+    const [owner, client] = await Promise.all([
+      s.w.owner.agent.post(`/api/estimates/${s.estimate.id}/accept`).send({ optionIds }),
+      t.request().post(`/api/client/${token}/accept`).send({ optionIds, name: 'Harriet Pembleton' }),
+    ]);
+    expect(client.status).toBe(200);
+    expect([200, 409]).toContain(owner.status);
+    if (owner.status === 409) expect(ErrorBody.parse(owner.body).error.code).toBe('estimate_status');
+    expect((await t.sql`select count(*)::int as n from job_stage_events where job_id = ${s.jobId}`)[0]!.n).toBe(1);
+    expect((await t.sql`select count(*)::int as n from tasks where job_id = ${s.jobId}`)[0]!.n).toBe(2);
+    expect((await t.sql`select count(*)::int as n from estimates where job_id = ${s.jobId} and status = 'accepted'`)[0]!.n).toBe(1);
+    expect(await jobRow(s.jobId)).toMatchObject({ status: 'active', position: 0 });
+  });
+
+  it('when the owner’s choice of options is incomplete, then 400 and the job still waits off the board with no tasks', async () => {
+    const s = await setUp();
+    await s.w.owner.agent.post(`/api/estimates/${s.estimate.id}/issue`).expect(200);
+    const res = await s.w.owner.agent.post(`/api/estimates/${s.estimate.id}/accept`).send({ optionIds: chosen(s.estimate).slice(0, 1) }).expect(400);
+    expect(ErrorBody.parse(res.body).error.fields).toHaveProperty('optionIds');
+    expect(await jobRow(s.jobId)).toMatchObject({ status: 'proposed', position: null });
+    expect((await t.sql`select count(*)::int as n from job_stage_events where job_id = ${s.jobId}`)[0]!.n).toBe(0);
+    expect((await t.sql`select count(*)::int as n from tasks where job_id = ${s.jobId}`)[0]!.n).toBe(0);
+    expect(JSON.stringify((await s.w.owner.agent.get('/api/board').expect(200)).body)).not.toContain(s.jobId);
+  });
+});
+
 describe('POST /api/client/:token/decline', () => {
   it('when the client declines with a reason, then the estimate is declined, the proposed job cancelled and never on the board, and the owner told', async () => {
     const { w, estimate, email, jobId } = await setUp();
@@ -248,9 +328,12 @@ describe('Deposit by card', () => {
 
   const paymentsOf = async (jobId: string) => (await t.sql`select status, amount_minor from payments where job_id = ${jobId}`).map((r) => [r.status, Number(r.amount_minor)]);
 
+  const costingOf = async (agent: MoneyWorkshop['owner']['agent'], jobId: string) => JobCosting.parse((await agent.get(`/api/jobs/${jobId}/costing`).expect(200)).body);
+
   it('when the client pays on the fake pay page, then the signed event records the deposit once against the job, shown to the owner and the client', async () => {
     const { w, token, jobId } = await accepted();
     const { checkoutUrl } = (await t.request().post(`/api/client/${token}/deposit`).expect(201)).body as { checkoutUrl: string };
+    expect((await costingOf(w.owner.agent, jobId)).money?.receivedMinor).toBe(0);
     expect(checkoutUrl.startsWith(fake.url)).toBe(true);
     const pay = await fetch(checkoutUrl);
     expect(await pay.text()).toContain('£951.84');
@@ -264,6 +347,23 @@ describe('Deposit by card', () => {
     await w.priya.agent.get(`/api/jobs/${jobId}/payments`).expect(403);
     expect(ClientPage.parse((await t.request().get(`/api/client/${token}`).expect(200)).body).deposit).toMatchObject({ status: 'paid', amountMinor: 95184 });
     expect(ErrorBody.parse((await t.request().post(`/api/client/${token}/deposit`).expect(409)).body).error.code).toBe('conflict');
+  });
+
+  it('when a deposit is paid, then the owner’s job costing shows it as money received, leaving the costs and margin alone; the foreman and technicians see no money', async () => {
+    const { w, token, jobId } = await accepted();
+    const before = await costingOf(w.owner.agent, jobId);
+    const { checkoutUrl } = (await t.request().post(`/api/client/${token}/deposit`).expect(201)).body as { checkoutUrl: string };
+    await fetch(checkoutUrl, { method: 'POST', redirect: 'manual' });
+    const after = await costingOf(w.owner.agent, jobId);
+    expect(after.money?.receivedMinor).toBe(95184);
+    const { receivedMinor: _before, ...costsBefore } = before.money!;
+    const { receivedMinor: _after, ...costsAfter } = after.money!;
+    expect(costsAfter).toEqual(costsBefore);
+    for (const agent of [w.foreman.agent, w.priya.agent]) {
+      const body = (await agent.get(`/api/jobs/${jobId}/costing`).expect(200)).body;
+      expect(keysMatching(body, ANY_MONEY)).toEqual([]);
+      expect(JSON.stringify(body)).not.toContain('received');
+    }
   });
 
   it('when the same event is replayed, then it is acknowledged and changes nothing', async () => {

@@ -143,6 +143,7 @@ describe('GET /api/jobs/:id/costing', () => {
       forecastMarginPercent: (113522 * 100) / 353000,
       targetMarginBasisPoints: 2500,
       isBelowTargetMargin: false,
+      receivedMinor: 0,
     });
     const shared = forecastAtCompletion({
       priceMinor: 353000,

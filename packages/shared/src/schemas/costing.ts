@@ -62,6 +62,8 @@ export const JobMoney = z.object({
   forecastMarginPercent: z.number().nullable(),
   targetMarginBasisPoints: z.number(),
   isBelowTargetMargin: z.boolean(),
+  /** Paid by the client so far (deposits by card, as charged: with VAT). Not a cost: it leaves the figures above alone. */
+  receivedMinor: z.number(),
 });
 export type JobMoney = z.infer<typeof JobMoney>;
 

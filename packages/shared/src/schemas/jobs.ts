@@ -124,6 +124,18 @@ export const BoardQuery = z.object({
 });
 export type BoardQuery = z.infer<typeof BoardQuery>;
 
+/**
+ * A card's hours, for every role (hours are not money): the sum of the job's task estimates, and
+ * the whole minutes of each of its time entries added up, running entries counted up to the
+ * moment the board was built (the same figures as the job's costing).
+ */
+export const BoardJobHours = z.object({ estimatedMinutes: z.number(), loggedMinutes: z.number() });
+export type BoardJobHours = z.infer<typeof BoardJobHours>;
+
+/** A job as its board card shows it. */
+export const BoardJob = Job.extend({ hours: BoardJobHours });
+export type BoardJob = z.infer<typeof BoardJob>;
+
 export const BoardStage = z.object({
   id: z.string(),
   name: z.string(),
@@ -131,7 +143,7 @@ export const BoardStage = z.object({
   wipLimit: z.number().nullable(),
   /** Jobs in the stage regardless of filters (for the WIP limit). */
   jobCount: z.number(),
-  jobs: z.array(Job),
+  jobs: z.array(BoardJob),
 });
 export const Board = z.object({ stages: z.array(BoardStage) });
 export type Board = z.infer<typeof Board>;
@@ -154,7 +166,7 @@ export const LIVE_EVENT_KINDS = [
   'estimate.changed',
   /** A part's catalogue entry or stock changed; `id` is the part's id. */
   'part.changed',
-  /** A job's costs changed (parts used, a sublet bill); `id` is the job's id. */
+  /** A job's costs or money received changed (parts used, a sublet bill, a payment); `id` is the job's id. */
   'costing.changed',
   /** Workshop settings or cost rates changed; `id` is the workshop's id. */
   'settings.changed',

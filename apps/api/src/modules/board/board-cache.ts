@@ -20,11 +20,12 @@ export function toBoardBody(value: unknown): BoardBody {
 
 /**
  * The last unfiltered board of each workshop, ready to send. Every committed change to a
- * workshop's jobs, stages, clients or pianos drops its board: this process's own writes right
- * after they commit, every process's writes through the live-event listener. A board built
- * while a change lands is not kept, so a stale board never outlives that change's notification.
- * Caching is on only while the listener listens (`reset` turns it on after each (re)connect),
- * and an entry expires after `ttlMs` in case notifications were lost while it reconnected.
+ * workshop's jobs, stages, clients, pianos, tasks or time entries drops its board: this process's
+ * own writes right after they commit, every process's writes through the live-event listener. A
+ * board built while a change lands is not kept, so a stale board never outlives that change's
+ * notification. Caching is on only while the listener listens (`reset` turns it on after each
+ * (re)connect), and an entry expires after `ttlMs` in case notifications were lost while it
+ * reconnected; that also bounds how far a running time entry's minutes on a kept board lag.
  */
 export function createBoardCache({ ttlMs = BOARD_CACHE_TTL_MS, clock = () => performance.now() } = {}) {
   // A board may be kept only if neither its workshop's generation nor the epoch moved while it was built.

@@ -1,4 +1,4 @@
-import type { BoardQuery, Job } from '@keybed/shared';
+import type { BoardJob, BoardQuery } from '@keybed/shared';
 import { toJob } from '../jobs/job-view';
 import type { TechnicianLookup } from '../jobs/technicians';
 import { toBoardBody, type BoardBody, type BoardCache } from './board-cache';
@@ -8,17 +8,21 @@ interface Deps {
   repo: BoardRepo;
   technicians: TechnicianLookup;
   cache: BoardCache;
+  now: () => Date;
 }
 
 const isFiltered = (query: BoardQuery) => query.q !== undefined || query.blocked !== undefined || query.technicianId !== undefined;
 
-export function createBoardService({ repo, technicians, cache }: Deps) {
-  /** Active stages in order with their jobs in position order; archived stages' jobs are not shown. */
+const NO_HOURS = { estimatedMinutes: 0, loggedMinutes: 0 };
+
+export function createBoardService({ repo, technicians, cache, now }: Deps) {
+  /** Active stages in order with their jobs in position order and their hours as of now; archived stages' jobs are not shown. */
   async function build(workshopId: string, query: BoardQuery): Promise<BoardBody> {
-    const [stages, rows] = await Promise.all([repo.activeStages(workshopId), repo.jobsOnBoard(workshopId, query)]);
+    const at = now();
+    const [stages, rows, hours] = await Promise.all([repo.activeStages(workshopId), repo.jobsOnBoard(workshopId, query), repo.hoursOnBoard(workshopId, at)]);
     const byJob = await technicians.forJobs(rows.map((r) => r.id));
-    const jobsByStage = new Map<string, Job[]>(stages.map((s) => [s.id, []]));
-    for (const row of rows) jobsByStage.get(row.stageId)?.push(toJob(row, byJob.get(row.id)));
+    const jobsByStage = new Map<string, BoardJob[]>(stages.map((s) => [s.id, []]));
+    for (const row of rows) jobsByStage.get(row.stageId)?.push({ ...toJob(row, byJob.get(row.id)), hours: hours.get(row.id) ?? NO_HOURS });
     return toBoardBody({ stages: stages.map((s) => ({ ...s, jobs: jobsByStage.get(s.id)! })) });
   }
 

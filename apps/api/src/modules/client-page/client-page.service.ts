@@ -214,7 +214,8 @@ export function createClientPageService(d: Deps) {
     /**
      * Records the client's acceptance of this exact revision. Two submissions at once: the
      * estimates service lets one accept; the other finds it accepted with the same options and
-     * answers the same page. The proposed job joins the board once, in the first stage.
+     * answers the same page. The estimates service's acceptance puts the proposed job on the board
+     * (once, at the end of the first stage), as when the owner records it in the app.
      */
     async accept(token: string, input: ClientAcceptInput, ipAddress: string): Promise<ClientPage> {
       const { link, estimate, auth } = await resolve(token);
@@ -222,7 +223,7 @@ export function createClientPageService(d: Deps) {
       let isFirst = false;
       if (estimate.status === 'issued') {
         try {
-          await estimates.accept(auth, estimate.id, { optionIds: input.optionIds });
+          await estimates.accept(auth, estimate.id, { optionIds: input.optionIds }, { byClient: true });
           isFirst = true;
         } catch (err) {
           if (!(err instanceof AppError && err.code === 'estimate_status')) throw err;
@@ -233,16 +234,9 @@ export function createClientPageService(d: Deps) {
       const chosen = accepted.options.filter((o) => o.isChosen).map((o) => o.id);
       if (!sameIds(chosen, input.optionIds)) throw new AppError('estimate_status', 409, 'This estimate was already accepted with other options. Please contact the workshop to change them.');
       const at = now();
-      // Locks in the board's order (stage, then job) before the response row, whose foreign key
-      // share-locks the estimate: the estimates service locks job then estimate, so no cycle forms.
-      const placed = await repo.transaction(async (tx) => {
-        const result = await d.jobs.placeOnBoard(tx, link.workshopId, estimate.jobId, null, at);
-        await repo.recordResponse(tx, { workshopId: link.workshopId, linkId: link.id, estimateId: estimate.id, answer: 'accepted', revision: accepted.revision, estimateVersion: estimate.version, optionIds: chosen, name: input.name, ipAddress, at });
-        if (result.isPlaced) await notifyLive(tx, link.workshopId, 'job.created', estimate.jobId, at);
-        return result;
-      });
-      if (placed.isPlaced) d.changed(link.workshopId);
-      if (!placed.hasStage) d.logger.warn({ jobId: estimate.jobId }, 'accepted work waits off the board: the workshop has no active stage');
+      await repo.transaction((tx) =>
+        repo.recordResponse(tx, { workshopId: link.workshopId, linkId: link.id, estimateId: estimate.id, answer: 'accepted', revision: accepted.revision, estimateVersion: estimate.version, optionIds: chosen, name: input.name, ipAddress, at }),
+      );
       const result = await page(auth, link, estimate.id);
       if (isFirst) {
         const total = formatMoney(result.estimate.totals.grossMinor, result.estimate.currency, 'en-GB');

@@ -23,6 +23,8 @@ export interface JobFact {
   priceMinor: number;
   subletBudgetMinor: number;
   subletBilledMinor: number;
+  /** Paid by the client (recorded payments), as charged. */
+  receivedMinor: number;
 }
 
 export interface TaskFact {
@@ -65,9 +67,9 @@ export function createCostingRepo(db: Database) {
   return {
     transaction: <T>(fn: (tx: Tx) => Promise<T>) => db.transaction(fn),
 
-    /** Jobs in scope with their agreed price (accepted estimates, ex tax) and sublet budget and bills. */
+    /** Jobs in scope with their agreed price (accepted estimates, ex tax), sublet budget and bills, and money received. */
     async jobs(workshopId: string, scope: CostingScope): Promise<JobFact[]> {
-      const rows = await db.execute<{ id: string; title: string; status: JobFact['status']; client_name: string; price: string; sublet_budget: string; sublet_billed: string }>(sql`
+      const rows = await db.execute<{ id: string; title: string; status: JobFact['status']; client_name: string; price: string; sublet_budget: string; sublet_billed: string; received: string }>(sql`
         with ${scopeCte(workshopId, scope)},
         agreed as (
           select e.job_id, sum(e.accepted_net_minor) as price
@@ -78,11 +80,14 @@ export function createCostingRepo(db: Database) {
           left join estimate_options o on o.id = l.option_id
           where e.status = 'accepted' and l.kind = 'sublet' and (l.option_id is null or o.is_chosen)
           group by e.job_id),
-        bills as (select b.job_id, sum(b.cost_minor) as cost from sublet_bills b join scope s on s.id = b.job_id group by b.job_id)
+        bills as (select b.job_id, sum(b.cost_minor) as cost from sublet_bills b join scope s on s.id = b.job_id group by b.job_id),
+        received as (select p.job_id, sum(p.amount_minor) as amount from payments p join scope s on s.id = p.job_id where p.status = 'paid' group by p.job_id)
         select j.id, j.title, j.status, c.name as client_name,
-          coalesce(a.price, 0)::text as price, coalesce(sb.cost, 0)::text as sublet_budget, coalesce(b.cost, 0)::text as sublet_billed
+          coalesce(a.price, 0)::text as price, coalesce(sb.cost, 0)::text as sublet_budget, coalesce(b.cost, 0)::text as sublet_billed,
+          coalesce(r.amount, 0)::text as received
         from scope s join jobs j on j.id = s.id join clients c on c.id = j.client_id
         left join agreed a on a.job_id = j.id left join sublet_budget sb on sb.job_id = j.id left join bills b on b.job_id = j.id
+        left join received r on r.job_id = j.id
         order by j.title, j.id`);
       return [...rows].map((r) => ({
         id: r.id,
@@ -92,6 +97,7 @@ export function createCostingRepo(db: Database) {
         priceMinor: n(r.price),
         subletBudgetMinor: n(r.sublet_budget),
         subletBilledMinor: n(r.sublet_billed),
+        receivedMinor: n(r.received),
       }));
     },
 

@@ -52,7 +52,8 @@ export const fallbackRate = (rates: { totalMinor: number; count: number }) => (r
 /**
  * Costs a job with the shared functions: labour and parts to date, sublet bills, the budget left
  * (unfinished tasks' unused minutes at the job's blended rate so far, else the workshop's average;
- * budgeted parts not yet used; sublet budget not yet billed) and the forecast at completion.
+ * budgeted parts not yet used; sublet budget not yet billed) and the forecast at completion;
+ * beside them, the money received from the client.
  */
 export function costJob({ job, tasks, parts }: JobFacts, targetMarginBasisPoints: number, workshopRateMinorPerHour: number): CostedJob {
   const sum = (pick: (t: TaskFact) => number) => tasks.reduce((total, t) => total + pick(t), 0);
@@ -104,6 +105,7 @@ export function costJob({ job, tasks, parts }: JobFacts, targetMarginBasisPoints
       forecastMarginPercent: forecast.forecastMarginPercent,
       targetMarginBasisPoints,
       isBelowTargetMargin: forecast.isBelowTargetMargin,
+      receivedMinor: job.receivedMinor,
     },
   };
 }

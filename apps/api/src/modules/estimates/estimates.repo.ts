@@ -1,6 +1,6 @@
-import { and, asc, eq, inArray, max, sql } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNotNull, isNull, max, sql } from 'drizzle-orm';
 import type { Database } from '@keybed/db/client';
-import { estimateLines, estimateOptions, estimates, jobs, parts, tasks, users } from '@keybed/db/schema';
+import { estimateLines, estimateOptions, estimates, jobs, jobStageEvents, parts, stages, tasks, users } from '@keybed/db/schema';
 import type { Tx } from '../auth/auth.repo';
 
 type Db = Database | Tx;
@@ -77,10 +77,39 @@ export function createEstimatesRepo(db: Database) {
       return row;
     },
 
-    /** An estimate's job without locking, to learn which job to lock first. */
+    /** An estimate's job and its status without locking, to learn what to lock first. */
     async peekJob(workshopId: string, id: string) {
-      const [row] = await db.select({ jobId: estimates.jobId }).from(estimates).where(and(eq(estimates.workshopId, workshopId), eq(estimates.id, id)));
-      return row?.jobId;
+      const [row] = await db
+        .select({ jobId: estimates.jobId, jobStatus: jobs.status })
+        .from(estimates)
+        .innerJoin(jobs, eq(jobs.id, estimates.jobId))
+        .where(and(eq(estimates.workshopId, workshopId), eq(estimates.id, id)));
+      return row;
+    },
+
+    /** The board's first active stage, locked (taken before the job: the board's lock order is stage, then job). */
+    async lockFirstActiveStage(tx: Tx, workshopId: string) {
+      const [row] = await tx
+        .select({ id: stages.id })
+        .from(stages)
+        .where(and(eq(stages.workshopId, workshopId), isNull(stages.archivedAt)))
+        .orderBy(asc(stages.position))
+        .limit(1)
+        .for('update');
+      return row;
+    },
+
+    /**
+     * Puts a proposed job (locked, with its stage) on the board at the end of `stageId`, active,
+     * with its first stage event. `byUserId` null: the client's own answer through their link.
+     */
+    async placeOnBoard(tx: Tx, v: { workshopId: string; jobId: string; stageId: string; byUserId: string | null; at: Date }) {
+      const [count] = await tx.select({ n: sql<number>`count(*)::int` }).from(jobs).where(and(eq(jobs.stageId, v.stageId), isNotNull(jobs.position)));
+      await tx
+        .update(jobs)
+        .set({ status: 'active', stageId: v.stageId, position: count?.n ?? 0, version: sql`${jobs.version} + 1`, updatedAt: v.at })
+        .where(and(eq(jobs.id, v.jobId), eq(jobs.status, 'proposed')));
+      await tx.insert(jobStageEvents).values({ workshopId: v.workshopId, jobId: v.jobId, fromStageId: null, toStageId: v.stageId, byUserId: v.byUserId, at: v.at });
     },
 
     async lock(tx: Tx, workshopId: string, id: string) {

@@ -149,12 +149,27 @@ export function createEstimatesService({ repo, settings, now, changed = () => {}
 
   /** Locks the estimate's job, then the estimate. */
   async function lockBoth(tx: Tx, auth: AuthContext, id: string) {
-    const jobId = await repo.peekJob(auth.workshopId, id);
-    if (!jobId) throw notFound('That estimate');
-    await repo.lockJob(tx, auth.workshopId, jobId);
+    const peeked = await repo.peekJob(auth.workshopId, id);
+    if (!peeked) throw notFound('That estimate');
+    await repo.lockJob(tx, auth.workshopId, peeked.jobId);
     const estimate = await repo.lock(tx, auth.workshopId, id);
     if (!estimate) throw notFound('That estimate');
     return estimate;
+  }
+
+  /**
+   * For accepting: locks the board's first active stage when the job waits for the client (the
+   * acceptance will put it there; stage before job is the board's lock order), then the job and
+   * the estimate. Answers the stage to place the job in, if it is still proposed once locked.
+   */
+  async function lockForAcceptance(tx: Tx, auth: AuthContext, id: string) {
+    const peeked = await repo.peekJob(auth.workshopId, id);
+    if (!peeked) throw notFound('That estimate');
+    const stage = peeked.jobStatus === 'proposed' ? await repo.lockFirstActiveStage(tx, auth.workshopId) : undefined;
+    const job = await repo.lockJob(tx, auth.workshopId, peeked.jobId);
+    const estimate = await repo.lock(tx, auth.workshopId, id);
+    if (!job || !estimate) throw notFound('That estimate');
+    return { estimate, isProposed: job.status === 'proposed', stage };
   }
 
   async function write<T>(workshopId: string, fn: (tx: Tx) => Promise<T>): Promise<T> {
@@ -243,16 +258,21 @@ export function createEstimatesService({ repo, settings, now, changed = () => {}
 
     /**
      * Records the client's acceptance with exactly one option per choice. The agreed price is the
-     * in-scope net; the job's labour budget is recomputed from every accepted estimate.
+     * in-scope net; the job's labour budget is recomputed from every accepted estimate. Accepting
+     * the original of a job waiting for the client (proposed) puts it on the board at the end of
+     * the first active stage, in the same transaction: the one path for the owner's acceptance in
+     * the app and the client's through their link (`byClient`: the stage event names no member).
      */
-    accept: (auth: AuthContext, id: string, input: AcceptEstimateInput): Promise<Estimate> =>
+    accept: (auth: AuthContext, id: string, input: AcceptEstimateInput, { byClient = false }: { byClient?: boolean } = {}): Promise<Estimate> =>
       write(auth.workshopId, async (tx) => {
-        const estimate = await lockBoth(tx, auth, id);
+        const { estimate, isProposed, stage } = await lockForAcceptance(tx, auth, id);
         if (estimate.status !== 'issued') throw statusError('Only an issued estimate can be accepted');
         const { options, lines } = await repo.load(auth.workshopId, { id }, tx);
         const problems = optionChoiceProblems(options, input.optionIds);
         if (problems.length > 0) throw new AppError('validation_failed', 400, problems[0]!, { optionIds: problems });
         if (estimate.kind === 'original' && (await repo.hasAcceptedOriginal(tx, estimate.jobId))) throw statusError('This job already has an accepted estimate');
+        const isPlacing = isProposed && estimate.kind === 'original';
+        if (isPlacing && !stage) throw new AppError('conflict', 409, 'The board has no active stage for this job to join. Restore or add a stage, then accept again.');
         const { taxRateBasisPoints } = await settings.get(auth.workshopId);
         const at = now();
         await repo.setChosen(tx, id, input.optionIds);
@@ -269,6 +289,10 @@ export function createEstimatesService({ repo, settings, now, changed = () => {}
         } catch (err) {
           if (constraintOf(err) === 'tasks_estimate_range') throw statusError('A task would be budgeted above 500 hours. Split its labour over more tasks.');
           throw err;
+        }
+        if (isPlacing && stage) {
+          await repo.placeOnBoard(tx, { workshopId: auth.workshopId, jobId: estimate.jobId, stageId: stage.id, byUserId: byClient ? null : auth.userId, at });
+          await notifyLive(tx, auth.workshopId, 'job.created', estimate.jobId, at);
         }
         await notifyLive(tx, auth.workshopId, 'estimate.changed', estimate.jobId, at);
         await notifyLive(tx, auth.workshopId, 'task.changed', estimate.jobId, at);

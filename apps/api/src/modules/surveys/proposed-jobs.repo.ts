@@ -1,11 +1,12 @@
-import { and, asc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
+import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import type { Database } from '@keybed/db/client';
-import { jobs, jobStageEvents, stages, surveys } from '@keybed/db/schema';
+import { jobs, stages, surveys } from '@keybed/db/schema';
 import type { Tx } from '../auth/auth.repo';
 
 /**
  * Jobs prepared from a survey. A proposed job has a stage (the first active one, where it will
- * start) but no position: it is not on the board until the client accepts, when it joins the end
+ * start) but no position: it is not on the board until its estimate is accepted (by the client
+ * through their link or by the owner in the app), when the estimates service puts it at the end
  * of the board's first active stage with its first stage event.
  */
 export function createProposedJobsRepo(db: Database) {
@@ -46,24 +47,6 @@ export function createProposedJobsRepo(db: Database) {
         await tx.update(surveys).set({ jobId: null }).where(and(eq(surveys.id, surveyId), eq(surveys.jobId, jobId)));
         await tx.delete(jobs).where(and(eq(jobs.workshopId, workshopId), eq(jobs.id, jobId), eq(jobs.status, 'proposed')));
       });
-    },
-
-    /**
-     * Puts a proposed job at the end of the first active stage. Locks the stage, then the job;
-     * answers false when the job is no longer proposed (already placed by a concurrent request).
-     */
-    async placeOnBoard(tx: Tx, workshopId: string, jobId: string, byUserId: string | null, at: Date) {
-      const stage = await firstActiveStage(tx, workshopId);
-      if (!stage) return { isPlaced: false, hasStage: false };
-      const [job] = await tx.select({ status: jobs.status }).from(jobs).where(and(eq(jobs.workshopId, workshopId), eq(jobs.id, jobId))).for('update');
-      if (job?.status !== 'proposed') return { isPlaced: false, hasStage: true };
-      const [count] = await tx.select({ n: sql<number>`count(*)::int` }).from(jobs).where(and(eq(jobs.stageId, stage.id), isNotNull(jobs.position)));
-      await tx
-        .update(jobs)
-        .set({ status: 'active', stageId: stage.id, position: count?.n ?? 0, version: sql`${jobs.version} + 1`, updatedAt: at })
-        .where(eq(jobs.id, jobId));
-      await tx.insert(jobStageEvents).values({ workshopId, jobId, fromStageId: null, toStageId: stage.id, byUserId, at });
-      return { isPlaced: true, hasStage: true };
     },
 
     /** A proposed job whose estimate the client declined is cancelled (it never reached the board). */

@@ -1,6 +1,6 @@
 import { MAX_REPLAY_AGE_HOURS, type ClockOffInput, type ClockOnInput, type ClockResult, type JobStatus, type RunningEntry } from '@keybed/shared';
 import { AppError, notFound } from '../../http/errors';
-import { notifyLive } from '../../lib/live-events';
+import { committed, notifyLive, type Changed } from '../../lib/live-events';
 import type { Tx } from '../auth/auth.repo';
 import { entryViews } from './entry-view';
 import { checkWeekOpen, translateEntryConstraint } from './time-rules';
@@ -62,7 +62,14 @@ function checkAfter(name: string, latest: { startedAt: Date; endedAt: Date | nul
   }
 }
 
-export function createClockService({ repo, now }: { repo: TimeRepo; now: () => Date }) {
+interface Deps {
+  repo: TimeRepo;
+  now: () => Date;
+  /** Told after each committed clock action: the board's cards show the minutes logged. */
+  changed?: Changed;
+}
+
+export function createClockService({ repo, now, changed = () => {} }: Deps) {
   async function result(tx: Tx, workshopId: string, timeZone: string, entryId: string, stoppedId: string | null, at: Date): Promise<ClockResult> {
     const rows = await repo.entriesByIds(workshopId, stoppedId ? [entryId, stoppedId] : [entryId], tx);
     const views = await entryViews(repo, workshopId, rows, at, tx, timeZone);
@@ -83,7 +90,7 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
      */
     async clockOn(actor: ClockActor, input: ClockOnInput): Promise<ClockOutcome> {
       const { workshopId, technicianId } = actor;
-      return repo
+      const write = repo
         .transaction(async (tx): Promise<ClockOutcome> => {
           const member = await lockActiveTechnician(tx, actor);
           const { timeZone } = member;
@@ -129,12 +136,13 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
           return { result: await result(tx, workshopId, timeZone, id, running?.id ?? null, nowAt), isNew: true };
         })
         .catch(translateEntryConstraint);
+      return committed(changed, workshopId, write);
     },
 
     /** Stops the technician's running entry; with nothing running, 409 and nothing changes. */
     async clockOff(actor: ClockActor, input: ClockOffInput): Promise<ClockOutcome> {
       const { workshopId, technicianId } = actor;
-      return repo
+      const write = repo
         .transaction(async (tx): Promise<ClockOutcome> => {
           const member = await lockActiveTechnician(tx, actor);
           const { timeZone } = member;
@@ -159,6 +167,7 @@ export function createClockService({ repo, now }: { repo: TimeRepo; now: () => D
           return { result: await result(tx, workshopId, timeZone, running.id, null, nowAt), isNew: true };
         })
         .catch(translateEntryConstraint);
+      return committed(changed, workshopId, write);
     },
 
     /** Who is on what right now, longest-running first. */

@@ -7,6 +7,7 @@ import { costingKeys } from '@/features/costing/api/keys';
 import { estimateKeys } from '@/features/estimates/api/keys';
 import { jobKeys } from '@/features/jobs/api/keys';
 import { partKeys } from '@/features/parts/api/keys';
+import { paymentKeys } from '@/features/payments/api/keys';
 import { pianoKeys } from '@/features/pianos/api/keys';
 import { settingsKeys } from '@/features/settings/api/keys';
 import { stageKeys } from '@/features/stages/api/keys';
@@ -20,7 +21,8 @@ import { timesheetKeys } from '@/features/timesheets/api/keys';
 export function keysFor(event: LiveEvent): QueryKey[] {
   switch (event.kind) {
     case 'job.created':
-      return [boardKeys.all, jobKeys.lists(), pianoKeys.details()];
+      // Also an accepted job that was waiting for the client: its page now shows it on the board.
+      return [boardKeys.all, jobKeys.detail(event.id), jobKeys.lists(), pianoKeys.details()];
     case 'job.updated':
       return [boardKeys.all, jobKeys.detail(event.id), jobKeys.lists(), pianoKeys.details()];
     case 'job.moved':
@@ -36,14 +38,15 @@ export function keysFor(event: LiveEvent): QueryKey[] {
       // Cards and the job page list the technicians with open tasks; budgets feed the costing.
       return [taskKeys.list(event.id), boardKeys.all, jobKeys.detail(event.id), costingKeys.job(event.id), costingKeys.reports()];
     case 'time.changed':
-      // Logged minutes show on tasks, in costing and on the margins page; who is on what; the technician's week.
-      return [benchKeys.running(), taskKeys.lists(), timesheetKeys.all, costingKeys.all];
+      // Logged minutes show on tasks, on the board's cards, in costing and on the margins page; who is on what; the technician's week.
+      return [benchKeys.running(), taskKeys.lists(), boardKeys.all, timesheetKeys.all, costingKeys.all];
     case 'estimate.changed':
       return [estimateKeys.list(event.id), costingKeys.job(event.id), costingKeys.reports()];
     case 'part.changed':
       return [partKeys.detail(event.id), partKeys.lists(), partKeys.usedOnTasks()];
     case 'costing.changed':
-      return [costingKeys.job(event.id), costingKeys.reports()];
+      // Parts used, a sublet bill, or a payment received on the job.
+      return [costingKeys.job(event.id), costingKeys.reports(), paymentKeys.job(event.id)];
     case 'settings.changed':
       return [settingsKeys.all, costingKeys.all];
     default:
@@ -65,6 +68,7 @@ export const keysAfterReconnect: QueryKey[] = [
   estimateKeys.all,
   partKeys.all,
   costingKeys.all,
+  paymentKeys.all,
   settingsKeys.all,
 ];
 

@@ -7,8 +7,8 @@ import { useSignedInMember } from '@/features/auth/hooks/use-signed-in-member';
 import { boardQueryOptions } from '@/features/board/api/get-board';
 import { BoardScreen } from '@/features/board/components/board-screen';
 import { filtersFromSearch } from '@/features/board/lib/board-filters';
-import { CardIndicators, hasCardFigures } from '@/features/costing/components/card-indicators';
-import { useCardFigures } from '@/features/costing/hooks/use-card-figures';
+import { CardHours, CardMargin } from '@/features/costing/components/card-indicators';
+import { useCardMargins } from '@/features/costing/hooks/use-card-margins';
 import { canRunBoard, canSeeCosts } from '@/lib/roles';
 import type { LayoutHandle } from './app-layout';
 
@@ -24,7 +24,7 @@ export const clientLoader =
 export function Component() {
   const me = useSignedInMember();
   const canRun = canRunBoard(me.role);
-  const figures = useCardFigures(canSeeCosts(me.role));
+  const margins = useCardMargins(canSeeCosts(me.role));
   return (
     <>
       <title>{`Board · ${me.workshop.name} · Keybed`}</title>
@@ -37,10 +37,18 @@ export function Component() {
         }
         actions={canRun ? <ButtonLink to={paths.newJob.build()}>New job</ButtonLink> : undefined}
       />
-      <BoardScreen canRunBoard={canRun} cardExtras={(job) => {
-          const f = figures.get(job.id);
-          return hasCardFigures(f) ? <CardIndicators figures={f} /> : undefined;
-        }} />
+      <BoardScreen
+        canRunBoard={canRun}
+        cardExtras={(job) => {
+          const margin = margins.get(job.id);
+          return (
+            <>
+              <CardHours hours={job.hours} />
+              {margin && <CardMargin figures={margin} />}
+            </>
+          );
+        }}
+      />
     </>
   );
 }

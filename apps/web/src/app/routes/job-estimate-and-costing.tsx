@@ -6,6 +6,7 @@ import { JobCosting } from '@/features/costing/components/job-costing';
 import { JobEstimates } from '@/features/estimates/components/job-estimates';
 import { useParts } from '@/features/parts/api/get-parts';
 import { LogPartsUsed } from '@/features/parts/components/log-parts-used';
+import { JobPayments } from '@/features/payments/components/job-payments';
 import { useWorkshopSettings } from '@/features/settings/api/get-settings';
 import { useJobTasks } from '@/features/tasks/api/get-job-tasks';
 import { canRunBoard, canSeeCosts } from '@/lib/roles';
@@ -58,6 +59,18 @@ export function PartsUsedSection({ job }: { job: JobDetail }) {
   );
 }
 
+/** The job's costing for every member; the payments the client made, for the owner. */
 export function CostingSection({ job }: { job: JobDetail }) {
-  return <JobCosting jobId={job.id} />;
+  const me = useSignedInMember();
+  return (
+    <div className="space-y-5">
+      <JobCosting jobId={job.id} />
+      {canSeeCosts(me.role) && (
+        <section aria-labelledby="job-payments-heading" className="space-y-2">
+          <h3 id="job-payments-heading" className="font-semibold">Payments from the client</h3>
+          <JobPayments jobId={job.id} />
+        </section>
+      )}
+    </div>
+  );
 }

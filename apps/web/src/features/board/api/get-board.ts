@@ -1,4 +1,5 @@
-import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { useEffect } from 'react';
+import { keepPreviousData, queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Board } from '@keybed/shared';
 import { api } from '@/lib/api-client';
 import { boardKeys, type BoardFilters } from './keys';
@@ -20,4 +21,21 @@ export const getBoard = (filters: BoardFilters) => {
 export const boardQueryOptions = (filters: BoardFilters) =>
   queryOptions({ queryKey: boardKeys.list(filters), queryFn: () => getBoard(filters), placeholderData: keepPreviousData });
 
-export const useBoard = (filters: BoardFilters) => useQuery(boardQueryOptions(filters));
+/**
+ * Live events bring every change, but the cards' logged minutes also grow while someone is
+ * clocked on, with no event: a board in view is read again each minute (an unchanged one answers
+ * 304), except while a move is in flight, which settles with its own read.
+ */
+const REFRESH_MS = 60_000;
+
+export function useBoard(filters: BoardFilters) {
+  const queryClient = useQueryClient();
+  useEffect(() => {
+    const timer = setInterval(() => {
+      if (document.visibilityState !== 'visible' || queryClient.isMutating({ mutationKey: boardKeys.moves() }) > 0) return;
+      void queryClient.invalidateQueries({ queryKey: boardKeys.lists() });
+    }, REFRESH_MS);
+    return () => clearInterval(timer);
+  }, [queryClient]);
+  return useQuery(boardQueryOptions(filters));
+}

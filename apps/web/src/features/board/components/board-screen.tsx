@@ -1,5 +1,5 @@
 import { useMemo, type ReactNode } from 'react';
-import type { Job } from '@keybed/shared';
+import type { BoardJob } from '@keybed/shared';
 import { useSearchParams } from 'react-router-dom';
 import { ErrorState } from '@/components/error-state';
 import { todayKey } from '@/lib/format';
@@ -15,7 +15,7 @@ import { StaticBoard } from './static-board';
 interface BoardScreenProps {
   canRunBoard: boolean;
   /** What a card shows in its footer beside the technicians (hours and money indicators). */
-  cardExtras?: (job: Job) => ReactNode;
+  cardExtras?: (job: BoardJob) => ReactNode;
 }
 
 /** The live board: filters from the URL, one column per active stage, cards that move for runners. */

@@ -15,7 +15,7 @@ export interface JobCardProps {
   today: string;
   /** The drag handle, for members who may move cards. */
   handle?: ReactNode;
-  /** Later issues add hours and money indicators here. */
+  /** The card's figures beside the technicians: hours for every member, the forecast margin for the owner. */
   footerExtras?: ReactNode;
   /** Lifted in a drag overlay: no link, so nothing can be focused twice. */
   isOverlay?: boolean;
@@ -77,9 +77,9 @@ export function JobCard({ job, unit, today, handle, footerExtras, isOverlay = fa
         </p>
       )}
       {(job.technicians.length > 0 || footerExtras) && (
-        <div className="mt-2 flex min-h-6 items-center justify-between gap-2 border-t border-graphite-200 pt-1.5">
+        <div className="mt-2 flex min-h-6 flex-wrap items-center justify-between gap-x-2 gap-y-1 border-t border-graphite-200 pt-1.5">
           <TechnicianInitials technicians={job.technicians} />
-          {footerExtras && <div className="ml-auto flex items-center gap-2">{footerExtras}</div>}
+          {footerExtras && <div className="ml-auto flex flex-wrap items-center justify-end gap-x-2 gap-y-1">{footerExtras}</div>}
         </div>
       )}
     </article>

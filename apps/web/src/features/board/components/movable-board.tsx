@@ -1,6 +1,6 @@
 import { useMemo, useState, type ReactNode } from 'react';
 import { DndContext, DragOverlay, KeyboardSensor, TouchSensor, useSensor, useSensors } from '@dnd-kit/core';
-import type { Board, Job } from '@keybed/shared';
+import type { Board, BoardJob } from '@keybed/shared';
 import { RegionBoundary } from '@/components/region-boundary';
 import type { PreferredLengthUnit } from '@/lib/length-unit';
 import { useMoveJob } from '../api/move-job';
@@ -30,7 +30,7 @@ interface MovableBoardProps {
   unit: PreferredLengthUnit;
   today: string;
   isFiltered: boolean;
-  cardExtras?: ((job: Job) => ReactNode) | undefined;
+  cardExtras?: ((job: BoardJob) => ReactNode) | undefined;
 }
 
 /** The board for owners and foremen: cards move by mouse, touch and keyboard. */
@@ -43,7 +43,7 @@ export function MovableBoard({ board, unit, today, isFiltered, cardExtras }: Mov
     useSensor(TouchSensor, { activationConstraint: { delay: 200, tolerance: 8 } }),
     useSensor(KeyboardSensor, { coordinateGetter: boardKeyboardCoordinates }),
   );
-  const jobsById = useMemo(() => new Map<string, Job>(board.stages.flatMap((s) => s.jobs.map((j) => [j.id, j] as const))), [board]);
+  const jobsById = useMemo(() => new Map<string, BoardJob>(board.stages.flatMap((s) => s.jobs.map((j) => [j.id, j] as const))), [board]);
   const stagesById = useMemo(() => new Map(board.stages.map((s) => [s.id, s])), [board]);
 
   function send(drop: Drop) {

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { Board, Job } from '@keybed/shared';
+import type { Board, BoardJob } from '@keybed/shared';
 import { RegionBoundary } from '@/components/region-boundary';
 import type { PreferredLengthUnit } from '@/lib/length-unit';
 import { JobCard } from './job-card';
@@ -10,7 +10,7 @@ interface StaticBoardProps {
   unit: PreferredLengthUnit;
   today: string;
   isFiltered: boolean;
-  cardExtras?: ((job: Job) => ReactNode) | undefined;
+  cardExtras?: ((job: BoardJob) => ReactNode) | undefined;
 }
 
 /** The board to read (technicians): the same columns and cards, nothing to drag. */

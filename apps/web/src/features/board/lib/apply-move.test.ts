@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { Board, Job } from '@keybed/shared';
-import { applyMove, serverIndexFor } from './apply-move';
+import type { Board, BoardJob, Job } from '@keybed/shared';
+import { applyMove, replaceJob, serverIndexFor } from './apply-move';
 
-const job = (id: string, stageId: string, position: number): Job => ({
+const job = (id: string, stageId: string, position: number): BoardJob => ({
   id,
   title: id,
   status: 'active',
@@ -19,11 +19,12 @@ const job = (id: string, stageId: string, position: number): Job => ({
   technicians: [],
   createdAt: '2026-01-05T09:00:00Z',
   updatedAt: '2026-01-05T09:00:00Z',
+  hours: { estimatedMinutes: 960, loggedMinutes: 0 },
 });
 
 /** Two stages: intake [a0 b1 c2], hammers [d0 e1]; `visible` keeps only some jobs, as a filter would. */
 function board(visible?: string[]): Board {
-  const show = (j: Job) => !visible || visible.includes(j.id);
+  const show = (j: BoardJob) => !visible || visible.includes(j.id);
   return {
     stages: [
       { id: 'intake', name: 'Intake', position: 0, wipLimit: null, jobCount: 3, jobs: [job('a', 'intake', 0), job('b', 'intake', 1), job('c', 'intake', 2)].filter(show) },
@@ -76,5 +77,15 @@ describe('applyMove', () => {
   it('when the job is not on this board, then the board is unchanged', () => {
     const before = board(['a']);
     expect(applyMove(before, { jobId: 'e', toStageId: 'intake', index: 0 })).toBe(before);
+  });
+});
+
+describe('replaceJob', () => {
+  it('when the server answers a move with the job (no hours), then the card takes its new version and place and keeps its hours', () => {
+    const logged = { ...board(), stages: board().stages.map((s) => ({ ...s, jobs: s.jobs.map((j) => (j.id === 'a' ? { ...j, hours: { estimatedMinutes: 960, loggedMinutes: 125 } } : j)) })) };
+    const { hours: _hours, ...answered } = { ...job('a', 'hammers', 1), version: 2 };
+    const after = replaceJob(logged, answered satisfies Job);
+    const card = after.stages[0]!.jobs.find((j) => j.id === 'a')!;
+    expect(card).toMatchObject({ version: 2, stageId: 'hammers', position: 1, hours: { estimatedMinutes: 960, loggedMinutes: 125 } });
   });
 });

@@ -1,4 +1,4 @@
-import type { Board, Job } from '@keybed/shared';
+import type { Board, BoardJob, Job } from '@keybed/shared';
 
 type BoardStage = Board['stages'][number];
 
@@ -10,9 +10,9 @@ export interface BoardMove {
 }
 
 /** A job's place in its stage; jobs on the board always have one, the array index is a fallback. */
-const placeOf = (stage: BoardStage, job: Job) => job.position ?? stage.jobs.indexOf(job);
+const placeOf = (stage: BoardStage, job: BoardJob) => job.position ?? stage.jobs.indexOf(job);
 
-export function findJob(board: Board, jobId: string): { stage: BoardStage; job: Job } | undefined {
+export function findJob(board: Board, jobId: string): { stage: BoardStage; job: BoardJob } | undefined {
   for (const stage of board.stages) {
     const job = stage.jobs.find((j) => j.id === jobId);
     if (job) return { stage, job };
@@ -46,7 +46,7 @@ export function applyMove(board: Board, move: BoardMove): Board {
   if (!found || !board.stages.some((s) => s.id === move.toStageId)) return board;
   const from = placeOf(found.stage, found.job);
   const isSameStage = found.stage.id === move.toStageId;
-  const moved: Job & { position: number } = { ...found.job, stageId: move.toStageId, position: move.index };
+  const moved: BoardJob & { position: number } = { ...found.job, stageId: move.toStageId, position: move.index };
 
   return {
     ...board,
@@ -66,7 +66,7 @@ export function applyMove(board: Board, move: BoardMove): Board {
   };
 }
 
-/** The board with the server's copy of one job put in place of the cached one (new version). */
+/** The board with the server's copy of one job put in place of the cached one (new version; the card keeps its hours). */
 export function replaceJob(board: Board, job: Job): Board {
   return {
     ...board,

@@ -1,33 +1,43 @@
+import type { BoardJobHours } from '@keybed/shared';
 import { cx } from '@/lib/cx';
-import { formatPercent } from '@/lib/money';
-import { HoursMeter } from './hours-meter';
+import { cardHours, cardMargin } from '../lib/card-hours';
 
-export interface CardFigures {
-  estimatedMinutes: number;
-  actualMinutes: number;
-  /** Owner only. */
-  forecastMarginPercent?: number | null;
-  isBelowTargetMargin?: boolean;
+/** The owner's money figures for a card, from the margins report. */
+export interface CardMarginFigures {
+  /** Null while the job has no agreed price. */
+  forecastMarginPercent: number | null;
+  isBelowTargetMargin: boolean;
 }
 
-/** Whether a card has anything to show: hours against an estimate, or a margin. */
-export const hasCardFigures = (f: CardFigures | undefined): f is CardFigures =>
-  f !== undefined && (f.estimatedMinutes > 0 || f.actualMinutes > 0 || (f.forecastMarginPercent ?? null) !== null);
-
-/** The board card's footer: hours used against the estimate, and the forecast margin when it is known. */
-export function CardIndicators({ figures }: { figures: CardFigures | undefined }) {
-  if (!figures) return null;
-  const hasMargin = figures.forecastMarginPercent !== undefined;
+/** Hours used against the estimate, for every member: a small bar and "h:mm of h:mm", with any overrun in words. */
+export function CardHours({ hours }: { hours: BoardJobHours }) {
+  const view = cardHours(hours.estimatedMinutes, hours.loggedMinutes);
   return (
-    <>
-      {(figures.estimatedMinutes > 0 || figures.actualMinutes > 0) && <HoursMeter isCompact estimatedMinutes={figures.estimatedMinutes} actualMinutes={figures.actualMinutes} />}
-      {hasMargin && figures.forecastMarginPercent !== null && (
-        <span className={cx('rounded-sm px-1 text-xs font-semibold tabular-figures', figures.isBelowTargetMargin ? 'bg-damper-light text-damper' : 'bg-felt-light text-felt')}>
-          <span className="sr-only">Forecast margin </span>
-          {formatPercent(figures.forecastMarginPercent ?? null)}
-          {figures.isBelowTargetMargin && <span className="sr-only">, below target</span>}
+    <span role="img" aria-label={view.label} title={view.label} className="inline-flex items-center gap-1.5 text-xs tabular-figures">
+      {hours.estimatedMinutes > 0 && (
+        <span className="relative block h-1.5 w-8 overflow-hidden rounded-full bg-graphite-200">
+          <span className={cx('absolute inset-y-0 left-0 rounded-full', view.isOver ? 'bg-damper' : 'bg-felt')} style={{ width: `${view.fill * 100}%` }} />
         </span>
       )}
-    </>
+      <span className={view.isOver ? 'font-semibold text-damper' : 'text-graphite-700'}>{view.text}</span>
+      {view.note && <span className={view.isOver ? 'font-semibold text-damper' : 'text-graphite-600'}>{view.note}</span>}
+    </span>
+  );
+}
+
+/** The owner's forecast margin, with "low" in words when it is below the workshop's target. */
+export function CardMargin({ figures }: { figures: CardMarginFigures }) {
+  if (figures.forecastMarginPercent === null) return null;
+  const view = cardMargin(figures.forecastMarginPercent, figures.isBelowTargetMargin);
+  return (
+    <span
+      role="img"
+      aria-label={view.label}
+      title={view.label}
+      className={cx('rounded-sm px-1 text-xs font-semibold tabular-figures', figures.isBelowTargetMargin ? 'bg-damper-light text-damper' : 'bg-felt-light text-felt')}
+    >
+      {view.text}
+      {view.note && ` · ${view.note}`}
+    </span>
   );
 }

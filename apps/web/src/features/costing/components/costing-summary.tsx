@@ -16,7 +16,7 @@ function Row({ label, children, isStrong = false, isBad = false }: { label: stri
 
 const panel = 'space-y-2 rounded-lg border border-graphite-300 bg-white p-4';
 
-/** Hours against the budget for everyone; cost to date, forecast and margin for the owner. */
+/** Hours against the budget for everyone; cost to date, forecast, margin and money received for the owner. */
 export function CostingSummary({ costing }: { costing: JobCosting }) {
   const { hours, money, currency } = costing;
   const m = (minor: number) => formatMinor(minor, currency);
@@ -62,6 +62,13 @@ export function CostingSummary({ costing }: { costing: JobCosting }) {
                 {money.isBelowTargetMargin ? 'Below' : 'At or above'} the target margin of {formatBasisPoints(money.targetMarginBasisPoints)}.
               </p>
             )}
+          </section>
+          <section aria-label="Money received" className={panel}>
+            <h3 className="font-semibold">Money received</h3>
+            <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm">
+              <Row label="Paid by the client, with VAT">{m(money.receivedMinor)}</Row>
+            </dl>
+            <p className="text-sm text-graphite-600">Deposits paid by card. Money in, so it leaves the costs and margin above alone.</p>
           </section>
         </>
       )}

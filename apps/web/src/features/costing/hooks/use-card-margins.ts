@@ -1,26 +1,20 @@
 import { useMemo } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { marginsQueryOptions } from '../api/get-margins';
-import type { CardFigures } from '../components/card-indicators';
+import type { CardMarginFigures } from '../components/card-indicators';
 
 /**
- * Hours and forecast margin for every board card from one request: the owner's margins report for
- * the year so far (a job on the board is open today, so it is in it). Other roles have no batched
- * source yet, so their cards show nothing rather than asking once per card.
+ * The owner's forecast margin for every board card from one request: the margins report for the
+ * year so far (a job on the board is open today, so it is in it). Hours come with the board itself.
  */
-export function useCardFigures(isOwner: boolean): Map<string, CardFigures> {
+export function useCardMargins(isOwner: boolean): Map<string, CardMarginFigures> {
   const report = useQuery({ ...marginsQueryOptions({}), enabled: isOwner, staleTime: 60_000 });
   return useMemo(
     () =>
       new Map(
         (report.data?.rows ?? []).map((row) => [
           row.jobId,
-          {
-            estimatedMinutes: row.estimatedMinutes,
-            actualMinutes: row.actualMinutes,
-            forecastMarginPercent: row.priceMinor > 0 ? row.forecastMarginPercent : null,
-            isBelowTargetMargin: row.isBelowTargetMargin,
-          },
+          { forecastMarginPercent: row.priceMinor > 0 ? row.forecastMarginPercent : null, isBelowTargetMargin: row.isBelowTargetMargin },
         ]),
       ),
     [report.data],

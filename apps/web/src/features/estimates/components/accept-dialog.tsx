@@ -37,7 +37,7 @@ export function AcceptDialog({ estimate, isOpen, isPending, onAccept, onCancel }
       onConfirm={confirm}
       onCancel={() => (setProblems([]), onCancel())}
     >
-      <p>{estimate.kind === 'variation' ? 'The extra work joins the job’s budget and price.' : 'Its labour sets the tasks’ budgeted hours and its price becomes the job’s budget.'}</p>
+      <p>{estimate.kind === 'variation' ? 'The extra work joins the job’s budget and price.' : 'Its labour sets the tasks’ budgeted hours and its price becomes the job’s budget. A job waiting for the client’s answer joins the board in its first stage.'}</p>
       {choices.map((c) => (
         <fieldset key={c.choice} className="mt-3">
           <legend className="font-semibold text-ink">{c.choice}: which did the client choose?</legend>
