@@ -53,7 +53,7 @@ export const SAFETY_CAUTIONS: readonly SafetyCaution[] = [
     facts: [
       { text: 'A string under tension can whip out when it breaks.', source: '[S14c]' },
       { text: 'Wear eye protection when raising pitch or restringing.', source: 'common practice' },
-      { text: 'Release and apply string tension in sequence across the plate, so that the cast-iron plate does not crack.', source: '[S14d]' },
+      { text: 'Release and apply string tension in sequence, so that the plate does not crack.', source: '[S14d]' },
     ],
   },
   {
@@ -64,8 +64,8 @@ export const SAFETY_CAUTIONS: readonly SafetyCaution[] = [
     helpAnchor: 'lead-key-weights',
     facts: [
       { text: 'In the UK, work with lead falls under the Control of Lead at Work Regulations 2002.', source: 'Control of Lead at Work Regulations 2002 [S14e]' },
-      { text: 'Do not eat, drink or smoke after handling lead without washing first.', source: '[S14e, S14f]' },
-      { text: 'Do not dry-sand or drill lead key weights: the dust is the hazard.', source: '[S14e, S14f]' },
+      { text: 'After handling lead, wash before eating.', source: '[S14e, S14f]' },
+      { text: 'Do not dry-sand or drill lead key weights.', source: '[S14e, S14f]' },
     ],
   },
   {
@@ -76,9 +76,9 @@ export const SAFETY_CAUTIONS: readonly SafetyCaution[] = [
     helpAnchor: 'finishing',
     facts: [
       { text: 'Flammable solvents need a risk assessment under the Dangerous Substances and Explosive Atmospheres Regulations 2002.', source: 'DSEAR 2002 [S14g]' },
-      { text: 'Store flammable liquids in fire-resisting storage, away from sources of ignition.', source: 'HSG51 [S14h]' },
+      { text: 'Store flammable solvents in fire-resisting storage.', source: 'HSG51 [S14h]' },
       { text: 'Sprays containing isocyanates need an air-fed mask, kept on until the booth has cleared.', source: '[S14i]' },
-      { text: 'Local exhaust ventilation, such as a spray booth’s extraction, is thoroughly examined and tested at least every 14 months.', source: 'HSG258 [S14j]' },
+      { text: 'Extraction, such as a spray booth’s, is examined at least every 14 months.', source: 'HSG258 [S14j]' },
     ],
   },
 ];

@@ -93,10 +93,10 @@ export function Component() {
         description={`${STATUS_LABELS[data.status]}${isOnBoard && stageName ? ` · in ${stageName}` : ''} · ${data.client.name}`}
         actions={back}
       />
-      {/* A job in a delivery or collection stage is about to be moved: say so before anything else. */}
-      {isOnBoard && <SafetyCautions variant="panel" cautions={cautionsForStage(stageName)} className="mb-6 max-w-prose" />}
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-8">
+          {/* A job in a delivery or collection stage is about to be moved: say so before anything else. */}
+          {isOnBoard && <SafetyCautions variant="panel" cautions={cautionsForStage(stageName)} />}
           <section aria-labelledby="job-tasks-heading" className="space-y-3">
             <h2 id="job-tasks-heading" className="text-lg font-semibold">Tasks</h2>
             <RegionBoundary>
