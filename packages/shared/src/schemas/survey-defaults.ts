@@ -73,8 +73,8 @@ export const DEFAULT_SURVEY_TEMPLATES: Record<SurveyPianoType, SurveyTemplateIte
 
 /**
  * Cautions shown where they matter. Calm and specific; they point to the rules, never replace them.
- * Weights: consumer sources give an upright about 200–300 kg and a grand about 250–500 kg
- * (TRADE.md §7 [S14a]).
+ * Weights ([S14a], consumer sources): an upright about 220–270 kg, a baby grand about 230–270 kg, a concert grand up to about 540 kg
+ * (TRADE.md §7).
  */
 export const CAUTIONS: Record<Caution['key'], Caution> = {
   ivory: {
@@ -87,6 +87,6 @@ export const CAUTIONS: Record<Caution['key'], Caution> = {
     key: 'moving',
     title: 'Moving the piano',
     text:
-      'Pianos are very heavy: an upright roughly 200–300 kg and a grand roughly 250–500 kg. Collection and delivery are done by trained piano movers with proper equipment; please do not try to move it yourself. Follow local rules on manual handling and access.',
+      'Pianos are very heavy: an upright weighs roughly 220–270 kg and a grand from about 230 kg to over 500 kg. Collection and delivery are done by trained piano movers with proper equipment; please do not try to move it yourself. Follow local rules on manual handling and access.',
   },
 };

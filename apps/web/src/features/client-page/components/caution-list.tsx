@@ -7,7 +7,7 @@ const CAUTION_TEXT: Record<Caution['key'], { sentence: string; link: { href: str
     link: { href: 'https://www.gov.uk/guidance/declare-ivory-you-intend-to-sell-or-hire-out', label: 'Ivory rules on GOV.UK' },
   },
   moving: {
-    sentence: 'Pianos are very heavy (an upright roughly 200–300 kg, a grand roughly 250–500 kg), so collection and delivery are done by trained piano movers with proper equipment; please do not move it yourself.',
+    sentence: 'Pianos are very heavy (an upright roughly 220–270 kg, a grand from about 230 kg to over 500 kg), so collection and delivery are done by trained piano movers with proper equipment; please do not move it yourself.',
     link: { href: 'https://www.hse.gov.uk/pubns/indg143.pdf', label: 'Safe handling of heavy loads (HSE)' },
   },
 };
