@@ -29,7 +29,9 @@ export class WallPage {
     await panel.getByRole('button', { name: new RegExp(`^${part.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) }).click();
     await panel.getByLabel('Quantity').fill(quantity);
     await panel.getByRole('button', { name: /^Log / }).click();
-    await expect(panel.getByRole('status').or(this.page.getByRole('status')).filter({ hasText: /Logged/ }).first()).toBeVisible();
+    await expect(panel.getByRole('status').filter({ hasText: /^Logged / })).toBeVisible();
+    await panel.getByRole('button', { name: 'Close' }).click();
+    await expect(panel).toHaveCount(0);
   }
 
   async openWithPin(name: string, pin: string) {

@@ -62,6 +62,12 @@ test('the owner prices a job with two options, the wall logs time and a part, an
   await expect(wall.tile(PRIYA.name)).toHaveAccessibleDescription(new RegExp(`Hang new hammers ${t}`));
   await wall.logPart(PRIYA.name, PRIYA.pin, HAMMER_SET, '1');
 
+  // Every member's board card shows the hours against the estimate; the owner's shows the margin too.
+  await page.goto('/board');
+  const card = page.getByRole('article', { name: title });
+  await expect(card.getByRole('img', { name: /^Hours: .* of 18 hours estimated/ })).toBeVisible();
+  await expect(card.getByRole('img', { name: /^Forecast margin/ })).toBeVisible();
+
   // The owner's margins page shows the job's cost to date and its forecast.
   await page.goto('/margins');
   const row = page.getByRole('row').filter({ hasText: title });
