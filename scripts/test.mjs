@@ -79,7 +79,7 @@ try {
     stops.push(() => payments.stop());
     const server = await startServer({
       port,
-      env: { DATABASE_URL: databaseUrl, SMTP_PORT: String(mail.smtpPort), LOG_LEVEL: 'warn', SIGN_IN_FAILURES_PER_ADDRESS: '1000', UPLOAD_DIR: path.join(clusterBase(ROOT), 'e2e-uploads'), ...payments.env },
+      env: { DATABASE_URL: databaseUrl, SMTP_PORT: String(mail.smtpPort), LOG_LEVEL: 'error', SIGN_IN_FAILURES_PER_ADDRESS: '1000', UPLOAD_DIR: path.join(clusterBase(ROOT), 'e2e-uploads'), ...payments.env },
     });
     stops.push(() => server.stop());
     await run(path.join(ROOT, 'node_modules/.bin/playwright'), ['test', '-c', 'e2e/playwright.config.ts', '--reporter=list,json'], {
