@@ -10,6 +10,9 @@ import type { Tx } from '../auth/auth.repo';
  * `entryCostMinor` ((minutes × rate × 2 + 60) div 120 = round half-up of minutes × rate / 60 for
  * non-negative values); the API tests check it against `labourCost`. Everything else is sums of
  * integers already rounded when written (stock movement values, estimate line costs, bills).
+ * Minutes come from `date_part` (double precision) rather than `extract` (numeric): per row over
+ * every entry of a year, numeric division is most of a report's cost, and for any duration under
+ * centuries the double's error is far below the microsecond, so the floor is the same.
  */
 
 /** Which jobs: one job, or those open at any time in [start, end) of one status. */
@@ -115,7 +118,7 @@ export function createCostingRepo(db: Database) {
           from technician_cost_rates r cross join zone z where r.workshop_id = ${workshopId}),
         costed as (
           select e.task_id, p.rate,
-            floor(extract(epoch from coalesce(e.ended_at, ${now.toISOString()}::timestamptz) - e.started_at) / 60)::bigint as minutes
+            floor(date_part('epoch', coalesce(e.ended_at, ${now.toISOString()}::timestamptz) - e.started_at) / 60)::bigint as minutes
           from time_entries e join scope s on s.id = e.job_id
           left join periods p on p.user_id = e.technician_id and e.started_at >= p.from_at and (p.until_at is null or e.started_at < p.until_at)),
         labour as (
@@ -206,8 +209,8 @@ export function createCostingRepo(db: Database) {
       db.execute<{ id: string; name: string; minutes: string }>(sql`
         with worked as (
           select e.technician_id,
-            sum(greatest(0, floor(extract(epoch from least(coalesce(e.ended_at, ${now.toISOString()}::timestamptz), ${end.toISOString()}::timestamptz)
-              - greatest(e.started_at, ${start.toISOString()}::timestamptz)) / 60)))::bigint as minutes
+            sum(greatest(0, floor(date_part('epoch', least(coalesce(e.ended_at, ${now.toISOString()}::timestamptz), ${end.toISOString()}::timestamptz)
+              - greatest(e.started_at, ${start.toISOString()}::timestamptz)) / 60)::bigint))::bigint as minutes
           from time_entries e
           where e.workshop_id = ${workshopId} and e.started_at < ${end.toISOString()}::timestamptz
             and coalesce(e.ended_at, ${now.toISOString()}::timestamptz) > ${start.toISOString()}::timestamptz
