@@ -17,7 +17,7 @@ import { notFound } from '../../http/errors';
 import { seesCosts } from '../../http/money-access';
 import { notifyLive } from '../../lib/live-events';
 import type { SettingsService } from '../settings/settings.service';
-import type { CostingRepo, CostingScope } from './costing.repo';
+import type { CostingRepo, CostingScope, PartTotal } from './costing.repo';
 import { costJob, fallbackRate, groupByJob, partsOfJob } from './job-costing';
 
 interface Deps {
@@ -38,23 +38,26 @@ const toBill = (b: { id: string; job_id: string; supplier: string; description: 
 
 /** Job costing and the owner's margins report, computed for many jobs at once. */
 export function createCostingService({ repo, settings, now }: Deps) {
-  /** Every fact of the jobs in scope: a constant number of statements. */
-  async function gather(workshopId: string, scope: CostingScope, timeZone: string) {
+  /**
+   * Every fact of the jobs in scope: a constant number of statements. `parts` reads them per task
+   * with their details (one job's costing), or totals per part (a report over many jobs).
+   */
+  async function gather<P extends PartTotal>(workshopId: string, scope: CostingScope, timeZone: string, parts: (workshopId: string, scope: CostingScope) => Promise<P[]>) {
     const at = now();
-    const [jobs, tasks, parts, rates] = await Promise.all([
+    const [jobs, tasks, partRows, rates] = await Promise.all([
       repo.jobs(workshopId, scope),
       repo.tasks(workshopId, scope, at),
-      repo.parts(workshopId, scope),
+      parts(workshopId, scope),
       repo.currentRates(workshopId, localDayKey(at, timeZone)),
     ]);
-    return { facts: groupByJob(jobs, tasks, parts), workshopRate: fallbackRate(rates) };
+    return { facts: groupByJob(jobs, tasks, partRows), workshopRate: fallbackRate(rates) };
   }
 
   return {
     /** One job per task and in total: hours and part quantities for everyone, money for the owner. */
     async job(auth: AuthContext, jobId: string): Promise<JobCosting> {
       const s = await settings.get(auth.workshopId);
-      const { facts, workshopRate } = await gather(auth.workshopId, { jobId }, s.timeZone);
+      const { facts, workshopRate } = await gather(auth.workshopId, { jobId }, s.timeZone, repo.parts);
       const one = facts[0];
       if (!one) throw notFound('That job');
       const isOwner = seesCosts(auth.role);
@@ -113,7 +116,7 @@ export function createCostingService({ repo, settings, now }: Deps) {
       const start = startOfLocalDay(from, s.timeZone);
       const end = startOfLocalDay(addDaysToDayKey(to, 1), s.timeZone);
       const [{ facts, workshopRate }, worked] = await Promise.all([
-        gather(auth.workshopId, { start, end, status: query.status }, s.timeZone),
+        gather(auth.workshopId, { start, end, status: query.status }, s.timeZone, repo.partTotals),
         repo.utilisation(auth.workshopId, start, end, at),
       ]);
       const rows: MarginRow[] = facts.map((f) => {

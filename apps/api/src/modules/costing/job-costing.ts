@@ -9,13 +9,13 @@ import {
   type JobForecast,
   type JobMoney,
 } from '@keybed/shared';
-import type { JobFact, PartFact, TaskFact } from './costing.repo';
+import type { JobFact, PartFact, PartTotal, TaskFact } from './costing.repo';
 
-/** One job's facts, gathered from the repository's statements. */
-export interface JobFacts {
+/** One job's facts, gathered from the repository's statements: its parts per task with details, or totals per part. */
+export interface JobFacts<P extends PartTotal = PartFact> {
   job: JobFact;
   tasks: TaskFact[];
-  parts: PartFact[];
+  parts: P[];
 }
 
 export interface CostedJob {
@@ -25,16 +25,16 @@ export interface CostedJob {
 }
 
 /** Groups the statements' rows by job, keeping the jobs' order. */
-export function groupByJob(jobs: JobFact[], tasks: TaskFact[], parts: PartFact[]): JobFacts[] {
-  const byJob = new Map(jobs.map((job) => [job.id, { job, tasks: [] as TaskFact[], parts: [] as PartFact[] }]));
+export function groupByJob<P extends PartTotal>(jobs: JobFact[], tasks: TaskFact[], parts: P[]): JobFacts<P>[] {
+  const byJob = new Map(jobs.map((job) => [job.id, { job, tasks: [] as TaskFact[], parts: [] as P[] }]));
   for (const t of tasks) byJob.get(t.jobId)?.tasks.push(t);
   for (const p of parts) byJob.get(p.jobId)?.parts.push(p);
   return [...byJob.values()];
 }
 
 /** Net used and budgeted quantity and cost per part of a job. */
-export function partsOfJob(parts: PartFact[]) {
-  const byPart = new Map<string, PartFact>();
+export function partsOfJob<P extends PartTotal>(parts: P[]): P[] {
+  const byPart = new Map<string, P>();
   for (const p of parts) {
     const sum = byPart.get(p.partId) ?? { ...p, taskId: null, usedMilli: 0, costMinor: 0, budgetMilli: 0, budgetCostMinor: 0 };
     sum.usedMilli += p.usedMilli;
@@ -55,7 +55,7 @@ export const fallbackRate = (rates: { totalMinor: number; count: number }) => (r
  * budgeted parts not yet used; sublet budget not yet billed) and the forecast at completion;
  * beside them, the money received from the client.
  */
-export function costJob({ job, tasks, parts }: JobFacts, targetMarginBasisPoints: number, workshopRateMinorPerHour: number): CostedJob {
+export function costJob({ job, tasks, parts }: JobFacts<PartTotal>, targetMarginBasisPoints: number, workshopRateMinorPerHour: number): CostedJob {
   const sum = (pick: (t: TaskFact) => number) => tasks.reduce((total, t) => total + pick(t), 0);
   const minutesToDate = sum((t) => t.minutes);
   const unratedMinutes = sum((t) => t.unratedMinutes);
