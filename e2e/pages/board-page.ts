@@ -26,6 +26,9 @@ export class BoardPage {
   /** Drags a card with the mouse onto another stage's column, in small steps as a hand would. */
   async dragWithMouse(title: string, toStage: string) {
     const card = this.card(title);
+    // Wait until the card is complete (its hours are the last thing a card shows) so nothing moves mid-drag.
+    await expect(card.getByRole('img', { name: /^Hours:/ })).toBeVisible();
+    await expect(this.column(toStage)).toBeVisible();
     await card.scrollIntoViewIfNeeded();
     const from = (await card.boundingBox())!;
     await this.page.mouse.move(from.x + from.width / 2, from.y + 12);

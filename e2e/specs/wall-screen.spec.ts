@@ -49,6 +49,11 @@ test('a paired wall screen clocks a technician on by PIN, shows it live, and clo
 });
 
 test('five wrong PINs lock the technician at the wall and say so plainly', async ({ page }) => {
+  // Start from an unlocked PIN, so the journey can run again against the same database.
+  const foreman = await apiAs(DEMO.foreman);
+  const declan = (await foreman.get<{ technicians: Array<{ membershipId: string; name: string }> }>('/api/technicians')).technicians.find((x) => x.name === DECLAN.name)!;
+  await foreman.post(`/api/team/members/${declan.membershipId}/unlock-pin`, {});
+  await foreman.dispose();
   await new SignInPage(page).goto();
   await new SignInPage(page).signInAs(DEMO.foreman, DEMO_PASSWORD);
   const wall = new WallPage(page);
